@@ -1,0 +1,59 @@
+// SPDX-License-Identifier: MPL-2.0
+// The state solver: the full thermodynamic state of water or steam from any
+// of the input pairs engineers use, by IAPWS-IF97, in core units
+// (p MPa, T K, h and u kJ/kg, s kJ/(kg K), v m3/kg, rho kg/m3, w m/s).
+//
+// Every function here either returns a complete, valid state or throws an
+// isentra::Error (RangeError for inputs outside IF97's range). None returns
+// NaN as a value. All functions are reentrant (no global mutable state).
+#pragma once
+
+#include "isentra/if97.hpp"
+
+namespace isentra {
+
+enum class Phase {
+    Liquid,         // compressed (subcooled) liquid, p < pc
+    Vapour,         // superheated vapour, p < pc (T < Tc or region 5 at any T)
+    Supercritical,  // p >= pc (any T in regions 1/2/3/5 above the critical pressure)
+    TwoPhase,       // inside the dome, 0 <= x <= 1 (saturated liquid/vapour included)
+};
+
+const char* phase_name(Phase phase);
+
+struct State {
+    double T = 0, p = 0, v = 0, rho = 0, u = 0, h = 0, s = 0;
+    // cp, cv, w, kappa are those of the single phase; inside the dome they are
+    // not defined and hold NaN (property accessors in the front ends turn
+    // that into a NotDefined error that points at the saturated values).
+    double cp = 0, cv = 0, w = 0, kappa = 0;
+    double drhodp_T = 0;  // (d rho/d p)_T, kg/(m3 MPa); NaN in the dome
+    // Vapour quality. Inside the dome 0..1. Outside it below the critical
+    // pressure: the equilibrium quality (h - h')/(h'' - h'), < 0 for
+    // subcooled liquid and > 1 for superheated vapour. NaN above pc or
+    // above Tc, where it is not defined.
+    double x = 0;
+    int region = 0;  // 1, 2, 3, 4 (two-phase) or 5
+    Phase phase = Phase::Liquid;
+    // For a two-phase state: the saturated liquid (f) and vapour (g).
+    if97::Props liq{}, vap{};
+};
+
+// Saturation: p in [pt, pc] or T in [273.15 K, Tc]. The result is a
+// two-phase State at x = 0 with liq and vap filled. At exactly the critical
+// point liq == vap.
+State saturation_p(double p);
+State saturation_T(double T);
+
+// Single-state solvers. Inputs in core units.
+State state_pT(double p, double T);  // throws Impossible if (p,T) lies exactly on the saturation line
+State state_ph(double p, double h);
+State state_ps(double p, double s);
+State state_hs(double h, double s);
+State state_px(double p, double x);  // p <= pc, 0 <= x <= 1
+State state_Tx(double T, double x);  // T <= Tc, 0 <= x <= 1
+
+// Single-phase props by region, no range checks: used by the solver and tests.
+if97::Props props_pT_region(double p, double T, int region);
+
+}  // namespace isentra
