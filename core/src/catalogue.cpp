@@ -120,12 +120,7 @@ double get(const State& st, Prop p) {
     case Prop::CV: return single_phase(st, st.cv, "cv");
     case Prop::W: return single_phase(st, st.w, "The speed of sound");
     case Prop::KAPPA: return single_phase(st, st.kappa, "The isentropic exponent");
-    case Prop::X:
-        if (!std::isfinite(st.x))
-            throw Error(ErrorCode::NotDefined,
-                        "vapour quality is not defined at or above the critical pressure "
-                        "(22.064 MPa) or the critical temperature (647.096 K)");
-        return st.x;
+    case Prop::X: return quality(st);
     case Prop::MU: return viscosity(st);
     case Prop::LAMBDA: return conductivity(st);
     case Prop::NU: return kinematic_viscosity(st);

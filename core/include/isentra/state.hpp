@@ -15,7 +15,8 @@ namespace isentra {
 enum class Phase {
     Liquid,         // compressed (subcooled) liquid, p < pc
     Vapour,         // superheated vapour, p < pc (T < Tc or region 5 at any T)
-    Supercritical,  // p >= pc (any T in regions 1/2/3/5 above the critical pressure)
+    Supercritical,  // p >= pc and T >= Tc (p >= pc, T < Tc counts as compressed Liquid;
+                    // p < pc, T >= Tc as Vapour)
     TwoPhase,       // inside the dome, 0 <= x <= 1 (saturated liquid/vapour included)
 };
 
@@ -28,10 +29,8 @@ struct State {
     // that into a NotDefined error that points at the saturated values).
     double cp = 0, cv = 0, w = 0, kappa = 0;
     double drhodp_T = 0;  // (d rho/d p)_T, kg/(m3 MPa); NaN in the dome
-    // Vapour quality. Inside the dome 0..1. Outside it below the critical
-    // pressure: the equilibrium quality (h - h')/(h'' - h'), < 0 for
-    // subcooled liquid and > 1 for superheated vapour. NaN above pc or
-    // above Tc, where it is not defined.
+    // Vapour quality inside the dome (0..1); NaN for a single-phase state
+    // (see quality() for the equilibrium quality outside the dome).
     double x = 0;
     int region = 0;  // 1, 2, 3, 4 (two-phase) or 5
     Phase phase = Phase::Liquid;
@@ -52,6 +51,12 @@ State state_ps(double p, double s);
 State state_hs(double h, double s);
 State state_px(double p, double x);  // p <= pc, 0 <= x <= 1
 State state_Tx(double T, double x);  // T <= Tc, 0 <= x <= 1
+
+// Vapour quality of any state: inside the dome its x (0..1); outside it,
+// between the triple-point and critical pressures, the equilibrium quality
+// (h - h')/(h'' - h'): below 0 for subcooled liquid, above 1 for superheated
+// vapour. Throws NotDefined at or above the critical pressure/temperature.
+double quality(const State& st);
 
 // Single-phase props by region, no range checks: used by the solver and tests.
 if97::Props props_pT_region(double p, double T, int region);

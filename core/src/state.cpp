@@ -1,0 +1,423 @@
+// SPDX-License-Identifier: MPL-2.0
+// The state solver. Regions and phases are decided from the inputs
+// themselves, compared with values from the basic equations (never from an
+// approximate backward temperature); backward equations only give starting
+// values, which are refined on the basic equations with Boost.Math's root
+// finders until the round trip closes.
+#include "isentra/state.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <cstdint>
+#include <limits>
+#include <string>
+
+#include <boost/math/tools/roots.hpp>
+
+#include "isentra/error.hpp"
+
+namespace isentra {
+
+using namespace if97;
+
+namespace {
+
+constexpr double nan_v = std::numeric_limits<double>::quiet_NaN();
+constexpr double none = nan_v;  // "no bound" in a RangeError
+constexpr int kDigits = 50;     // bits of the root finders' relative tolerance (~1e-15)
+constexpr std::uintmax_t kMaxIter = 100;
+
+// ---- range checks ----------------------------------------------------------
+
+void check_finite(const char* name, Quantity q, double v) {
+    if (!std::isfinite(v)) throw RangeError(name, q, v, none, none);
+}
+
+void check_p(double p) {
+    check_finite("p", Quantity::Pressure, p);
+    if (!(p > 0.0)) throw RangeError("p", Quantity::Pressure, p, 0.0, p_max, "(pressure must be positive)");
+    if (p > p_max) throw RangeError("p", Quantity::Pressure, p, none, p_max, "(the upper limit of IAPWS-IF97)");
+}
+
+void check_pT(double p, double T) {
+    check_p(p);
+    check_finite("T", Quantity::Temperature, T);
+    if (T < T_min || T > T_max)
+        throw RangeError("T", Quantity::Temperature, T, T_min, T_max, "(the range of IAPWS-IF97)");
+    if (T > T_25 && p > p_max5)
+        throw RangeError("p", Quantity::Pressure, p, none, p_max5,
+                         "above 1073.15 K (800 degC), where IAPWS-IF97 region 5 ends");
+}
+
+void check_x(double x) {
+    check_finite("x", Quantity::None, x);
+    if (x < 0.0 || x > 1.0) throw RangeError("x", Quantity::None, x, 0.0, 1.0, "(vapour quality is a mass fraction)");
+}
+
+// ---- states from Props -------------------------------------------------------
+
+State from_props(const Props& pr) {
+    State st;
+    st.T = pr.T;
+    st.p = pr.p;
+    st.v = pr.v;
+    st.rho = pr.rho;
+    st.u = pr.u;
+    st.h = pr.h;
+    st.s = pr.s;
+    st.cp = pr.cp;
+    st.cv = pr.cv;
+    st.w = pr.w;
+    st.kappa = pr.w * pr.w * pr.rho / (pr.p * 1e6);
+    st.drhodp_T = pr.drhodp_T;
+    st.region = pr.region;
+    st.x = nan_v;
+    if (pr.p >= pc)
+        st.phase = pr.T >= Tc ? Phase::Supercritical : Phase::Liquid;
+    else if (pr.T >= Tc)
+        st.phase = Phase::Vapour;
+    else if (pr.region == 1)
+        st.phase = Phase::Liquid;
+    else if (pr.region == 2 || pr.region == 5)
+        st.phase = Phase::Vapour;
+    else  // region 3 below the critical point: liquid side if denser than critical
+        st.phase = pr.rho > rhoc ? Phase::Liquid : Phase::Vapour;
+    return st;
+}
+
+// Saturated liquid and vapour from T (basic equations).
+SatPair sat_pair_T(double T) {
+    if (T <= T_13) {
+        const double p = psat(T);
+        return SatPair{region1(p, T), region2(p, T)};
+    }
+    return region3_saturation(T);
+}
+
+State two_phase(const SatPair& sp, double p, double T, double x) {
+    State st;
+    const Props& l = sp.liq;
+    const Props& g = sp.vap;
+    st.T = T;
+    st.p = p;
+    st.x = x;
+    st.v = l.v + x * (g.v - l.v);
+    st.rho = 1.0 / st.v;
+    st.u = l.u + x * (g.u - l.u);
+    st.h = l.h + x * (g.h - l.h);
+    st.s = l.s + x * (g.s - l.s);
+    st.region = 4;
+    st.phase = Phase::TwoPhase;
+    st.liq = l;
+    st.vap = g;
+    if (x == 0.0 || x == 1.0) {  // saturated liquid or vapour: single-phase properties are defined
+        const Props& e = x == 0.0 ? l : g;
+        st.v = e.v;
+        st.rho = e.rho;
+        st.u = e.u;
+        st.h = e.h;
+        st.s = e.s;
+        st.cp = e.cp;
+        st.cv = e.cv;
+        st.w = e.w;
+        st.kappa = e.w * e.w * e.rho / (e.p * 1e6);
+        st.drhodp_T = e.drhodp_T;
+    } else {
+        st.cp = st.cv = st.w = st.kappa = st.drhodp_T = nan_v;
+    }
+    return st;
+}
+
+// ---- root finding ------------------------------------------------------------
+
+// Newton on [lo, hi] with Boost.Math; f(x) returns (residual, derivative).
+// Falls back to TOMS 748 on the bracket when Newton does not settle.
+template <class F>
+double solve_newton(F f, double guess, double lo, double hi, const char* what) {
+    guess = std::min(std::max(guess, lo), hi);
+    std::uintmax_t it = kMaxIter;
+    double r = nan_v;
+    try {
+        r = boost::math::tools::newton_raphson_iterate(f, guess, lo, hi, kDigits, it);
+    } catch (const std::exception&) {
+        it = kMaxIter;
+    }
+    if (it < kMaxIter && std::isfinite(r)) return r;
+    // Fallback: bracketing solver.
+    auto g = [&](double x) { return std::get<0>(f(x)); };
+    double a = lo, b = hi, fa = g(a), fb = g(b);
+    if (fa == 0) return a;
+    if (fb == 0) return b;
+    if ((fa > 0) == (fb > 0))
+        throw Error(ErrorCode::NoConvergence, std::string("no solution found for ") + what);
+    std::uintmax_t it2 = 200;
+    auto tol = boost::math::tools::eps_tolerance<double>(kDigits);
+    auto res = boost::math::tools::toms748_solve(g, a, b, fa, fb, tol, it2);
+    return 0.5 * (res.first + res.second);
+}
+
+template <class G>
+double solve_bracket(G g, double lo, double hi, const char* what) {
+    double fa = g(lo), fb = g(hi);
+    if (fa == 0) return lo;
+    if (fb == 0) return hi;
+    if ((fa > 0) == (fb > 0)) throw Error(ErrorCode::NoConvergence, std::string("no solution found for ") + what);
+    std::uintmax_t it = 200;
+    auto tol = boost::math::tools::eps_tolerance<double>(kDigits);
+    auto res = boost::math::tools::toms748_solve(g, lo, hi, fa, fb, tol, it);
+    return 0.5 * (res.first + res.second);
+}
+
+// Region by (p,T), p and T already range-checked. 0 = exactly on saturation.
+int region_pT(double p, double T) {
+    if (T <= T_13) {
+        const double ps = psat(T);
+        if (p > ps) return 1;
+        if (p < ps) return 2;
+        return 0;
+    }
+    if (T <= T_25) {
+        if (T <= 863.15 && p > b23_p(T)) {
+            if (T < Tc && p == psat(T)) return 0;
+            return 3;
+        }
+        return 2;
+    }
+    return 5;
+}
+
+// ---- (p, y) solvers where y is h or s -----------------------------------------
+
+enum class Y { H, S };
+
+double yval(const Props& pr, Y y) { return y == Y::H ? pr.h : pr.s; }
+double ydT(const Props& pr, Y y) { return y == Y::H ? pr.cp : pr.cp / pr.T; }
+const char* yname(Y y) { return y == Y::H ? "h" : "s"; }
+Quantity yq(Y y) { return y == Y::H ? Quantity::SpecificEnergy : Quantity::SpecificEntropy; }
+
+Props props_region(double p, double T, int region) {
+    switch (region) {
+    case 1: return region1(p, T);
+    case 2: return region2(p, T);
+    case 3: return region3_pT(p, T);
+    default: return region5(p, T);
+    }
+}
+
+// Solves y(p,T) = y for T within [lo, hi] in one region.
+State solve_T_in_region(double p, double y, Y which, int region, double lo, double hi, double guess) {
+    auto f = [&](double T) {
+        const Props pr = props_region(p, T, region);
+        return std::make_pair(yval(pr, which) - y, ydT(pr, which));
+    };
+    if (!(guess >= lo && guess <= hi)) guess = 0.5 * (lo + hi);
+    const double T = solve_newton(f, guess, lo, hi, which == Y::H ? "T(p,h)" : "T(p,s)");
+    return from_props(props_region(p, T, region));
+}
+
+double backward_T(double p, double y, Y which, int region) {
+    switch (region) {
+    case 1: return which == Y::H ? region1_T_ph(p, y) : region1_T_ps(p, y);
+    case 2: return which == Y::H ? region2_T_ph(p, y) : region2_T_ps(p, y);
+    case 3: return which == Y::H ? region3_T_ph(p, y) : region3_T_ps(p, y);
+    default: return nan_v;
+    }
+}
+
+
+double top_T(double p) { return p <= p_max5 ? T_max : T_25; }
+int top_region(double p) { return p <= p_max5 ? 5 : 2; }
+
+// Vapour-side single phase above T_from (Tsat, B23 or 623.15 K) in regions 2 and 5.
+State vapour_25(double p, double y, Y which, double T_from) {
+    if (p <= p_max5) {
+        const Props r25 = region2(p, T_25);
+        if (y > yval(r25, which)) {
+            const Props r5 = region5(p, T_25);
+            return solve_T_in_region(p, y, which, 5, T_25, T_max,
+                                     T_25 + (y - yval(r5, which)) / ydT(r5, which));
+        }
+    }
+    return solve_T_in_region(p, y, which, 2, T_from, T_25, backward_T(p, y, which, 2));
+}
+
+}  // namespace
+
+const char* phase_name(Phase phase) {
+    switch (phase) {
+    case Phase::Liquid: return "liquid";
+    case Phase::Vapour: return "vapour";
+    case Phase::Supercritical: return "supercritical";
+    case Phase::TwoPhase: return "two-phase";
+    }
+    return "";
+}
+
+Props props_pT_region(double p, double T, int region) { return props_region(p, T, region); }
+
+State saturation_T(double T) {
+    check_finite("T", Quantity::Temperature, T);
+    if (T < Tt || T > Tc)
+        throw RangeError("T", Quantity::Temperature, T, Tt, Tc,
+                         "(saturation exists from the triple point to the critical point)");
+    const SatPair sp = sat_pair_T(T);
+    return two_phase(sp, T == Tc ? pc : psat(T), T, 0.0);
+}
+
+State saturation_p(double p) {
+    check_finite("p", Quantity::Pressure, p);
+    if (p < pt || p > pc)
+        throw RangeError("p", Quantity::Pressure, p, pt, pc,
+                         "(saturation exists from the triple point to the critical point)");
+    const double T = p == pc ? Tc : tsat(p);
+    const SatPair sp = sat_pair_T(T);
+    return two_phase(sp, p, T, 0.0);
+}
+
+State state_px(double p, double x) {
+    check_x(x);
+    State st = saturation_p(p);
+    return two_phase(SatPair{st.liq, st.vap}, p, st.T, x);
+}
+
+State state_Tx(double T, double x) {
+    check_x(x);
+    State st = saturation_T(T);
+    return two_phase(SatPair{st.liq, st.vap}, st.p, T, x);
+}
+
+State state_pT(double p, double T) {
+    check_pT(p, T);
+    const int r = region_pT(p, T);
+    if (r == 0)
+        throw Error(ErrorCode::Impossible,
+                    "p and T lie exactly on the saturation line, where they do not fix the state; give the "
+                    "vapour quality x (STEAM.*.PX / STEAM.*.TX) or h or s instead");
+    return from_props(props_region(p, T, r));
+}
+
+namespace {
+
+State state_py(double p, double y, Y which) {
+    check_p(p);
+    check_finite(yname(which), yq(which), y);
+    const Quantity q = yq(which);
+    const char* name = yname(which);
+    const double p_dome_min = psat(T_min);  // 611.213 Pa: below it no liquid exists in IF97
+    // Range of y at this pressure: 273.15 K .. the top temperature.
+    const Props lowest = p >= p_dome_min ? region1(p, T_min) : region2(p, T_min);
+    const double ylow = yval(lowest, which);
+    if (y < ylow)
+        throw RangeError(name, q, y, ylow, none,
+                         "at this pressure (colder than 273.15 K, the lower limit of IAPWS-IF97)");
+    const double yhigh = yval(props_region(p, top_T(p), top_region(p)), which);
+    if (y > yhigh)
+        throw RangeError(name, q, y, none, yhigh,
+                         p <= p_max5 ? "at this pressure (hotter than 2273.15 K, the upper limit of IAPWS-IF97)"
+                                     : "at this pressure (hotter than 1073.15 K, the limit of IAPWS-IF97 above 50 MPa)");
+
+    if (p < p_dome_min) return vapour_25(p, y, which, T_min);
+
+    if (p < pc) {
+        const double Ts = tsat(p);
+        const SatPair sp = sat_pair_T(Ts);
+        const double yl = yval(sp.liq, which), yv = yval(sp.vap, which);
+        if (y >= yl && y <= yv) {
+            const double x = (y - yl) / (yv - yl);
+            State st = two_phase(sp, p, Ts, x);
+            if (which == Y::H) st.h = y; else st.s = y;
+            return st;
+        }
+        if (y < yl) {  // compressed liquid
+            if (Ts <= T_13) return solve_T_in_region(p, y, which, 1, T_min, Ts, backward_T(p, y, which, 1));
+            const Props r13 = region1(p, T_13);
+            if (y <= yval(r13, which))
+                return solve_T_in_region(p, y, which, 1, T_min, T_13, backward_T(p, y, which, 1));
+            return solve_T_in_region(p, y, which, 3, T_13, Ts, backward_T(p, y, which, 3));
+        }
+        // superheated vapour
+        if (Ts <= T_13) return vapour_25(p, y, which, Ts);
+        const double TB = b23_T(p);
+        const Props rb = region2(p, TB);
+        if (y < yval(rb, which)) return solve_T_in_region(p, y, which, 3, Ts, TB, backward_T(p, y, which, 3));
+        return vapour_25(p, y, which, TB);
+    }
+    // p >= pc: no dome.
+    const Props r13 = region1(p, T_13);
+    if (y <= yval(r13, which)) return solve_T_in_region(p, y, which, 1, T_min, T_13, backward_T(p, y, which, 1));
+    const double TB = b23_T(p);
+    const Props rb = region2(p, TB);
+    if (y < yval(rb, which)) return solve_T_in_region(p, y, which, 3, T_13, TB, backward_T(p, y, which, 3));
+    return vapour_25(p, y, which, TB);
+}
+
+}  // namespace
+
+State state_ph(double p, double h) { return state_py(p, h, Y::H); }
+State state_ps(double p, double s) { return state_py(p, s, Y::S); }
+
+// (h,s): along an isentrope (dh/dp)_s = v > 0 in every phase, so h(p) at
+// fixed s is monotonic and continuous: solve state_ps(p, s).h = h for p.
+State state_hs(double h, double s) {
+    check_finite("h", Quantity::SpecificEnergy, h);
+    check_finite("s", Quantity::SpecificEntropy, s);
+    // Pressure interval on which (p, s) is inside the range of IAPWS-IF97.
+    auto ps_ok = [&](double p, State& out) {
+        try {
+            out = state_ps(p, s);
+            return true;
+        } catch (const RangeError&) {
+            return false;
+        }
+    };
+    State st_lo, st_hi;
+    double plo = pt, phi = p_max;
+    if (!ps_ok(plo, st_lo)) {
+        // s below the lowest entropy at the triple-point pressure (cold compressed liquid)
+        // or above the highest at 2273.15 K: find where (p,s) enters the range.
+        if (!ps_ok(phi, st_hi))
+            throw RangeError("s", Quantity::SpecificEntropy, s, none, none, "(outside the range of IAPWS-IF97 at every pressure)");
+        // Entropy too small at low p: smallest p with T(p,s) >= 273.15 K.
+        plo = solve_bracket(
+            [&](double p) { return region1(p, T_min).s - s; }, pt, p_max, "the lowest pressure for this entropy");
+        plo = std::nextafter(plo, p_max);
+        while (!ps_ok(plo, st_lo)) plo = std::nextafter(plo, p_max) * (1 + 1e-15);
+    }
+    if (!ps_ok(phi, st_hi)) {
+        // Above 50 MPa only up to 1073.15 K: highest p with T(p,s) <= 1073.15 K.
+        const double pmid = p_max5;
+        if (!ps_ok(pmid, st_hi))
+            throw RangeError("s", Quantity::SpecificEntropy, s, none, none, "(outside the range of IAPWS-IF97)");
+        phi = solve_bracket([&](double p) { return region2(p, T_25).s - s; }, p_max5, p_max,
+                            "the highest pressure for this entropy");
+        while (!ps_ok(phi, st_hi)) phi = std::nextafter(phi, pt) * (1 - 1e-15);
+    }
+    if (h < st_lo.h)
+        throw RangeError("h", Quantity::SpecificEnergy, h, st_lo.h, st_hi.h,
+                         "for this entropy (the state would lie below the triple-point pressure or outside IAPWS-IF97)");
+    if (h > st_hi.h)
+        throw RangeError("h", Quantity::SpecificEnergy, h, st_lo.h, st_hi.h, "for this entropy (the state would lie above the pressure limit of IAPWS-IF97)");
+    // Starting pressure from the backward equations where they apply.
+    double guess = nan_v;
+    const double g1 = region1_p_hs(h, s), g2 = region2_p_hs(h, s);
+    if (std::isfinite(g2) && g2 > plo && g2 < phi && s > 5.0) guess = g2;
+    else if (std::isfinite(g1) && g1 > plo && g1 < phi && s < 3.8) guess = g1;
+    else guess = std::sqrt(plo * phi);
+    auto f = [&](double p) {
+        const State st = state_ps(p, s);
+        return std::make_pair(st.h - h, st.v * 1e3);  // kJ/kg per MPa
+    };
+    return state_ps(solve_newton(f, guess, plo, phi, "p(h,s)"), s);
+}
+
+double quality(const State& st) {
+    if (st.phase == Phase::TwoPhase) return st.x;
+    if (st.p >= pc || st.T >= Tc || st.p < pt)
+        throw Error(ErrorCode::NotDefined,
+                    "vapour quality is not defined for this state: it exists only below the critical pressure "
+                    "(22.064 MPa) and above the triple-point pressure (611.657 Pa)");
+    const State sat = saturation_p(st.p);
+    return (st.h - sat.liq.h) / (sat.vap.h - sat.liq.h);
+}
+
+}  // namespace isentra
