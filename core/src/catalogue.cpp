@@ -4,6 +4,7 @@
 // families are built from tables below; their order (and so the generated
 // IDL) is deterministic.
 #include "isentra/catalogue.hpp"
+#include "catalogue_detail.hpp"
 
 #include <algorithm>
 #include <cctype>
@@ -171,13 +172,18 @@ std::string lower(std::string s) {
     return s;
 }
 
-Arg units_arg() {
+}  // namespace
+
+Arg detail::units_arg() {
     return Arg{"units", Quantity::Text,
                "Optional unit system for all inputs and the result: \"SI\" (default: MPa, degC, kJ/kg), "
                "\"US\" (psia, degF, Btu/lbm), \"BAR\", \"KPA\", \"K\"; single quantities can be "
                "overridden, e.g. \"US p=psig\" or \"SI p=barg patm=0.0985MPa\". May be a cell reference.",
                true};
 }
+
+namespace {
+using detail::units_arg;
 
 const char* const error_hint =
     " An invalid input gives an error value; =STEAM.EXPLAIN(\"<name>\"; same arguments) shows why, in "
@@ -364,6 +370,7 @@ std::vector<Function> build() {
     }
     add_property_family(out);
     add_state_family(out);
+    detail::add_equipment_family(out);
     {
         Function f;
         f.name = "STEAM.CONVERT";
