@@ -5,6 +5,7 @@
 #include <gtest/gtest.h>
 
 #include <cmath>
+#include <cstdio>
 #include <fstream>
 #include <sstream>
 #include <string>
@@ -41,6 +42,12 @@ State state_from(const if97::Props& pr, Phase phase) {
 }
 
 double rel(double a, double b) { return std::fabs(a / b - 1.0); }
+
+std::string g(double v) {
+    char buf[32];
+    std::snprintf(buf, sizeof buf, "%.3g", v);
+    return buf;
+}
 
 }  // namespace
 
@@ -106,8 +113,8 @@ TEST(TransportViscosity, R12_08_Table5_WithIf97Derivatives) {
     // Eq. 25 at T_R) gives at the R12-08 Table 5 points. IF97's derivatives
     // differ from IAPWS-95's near the critical point, so xi differs (e.g.
     // 12.47 nm instead of 16.59 nm at 322 kg/m3, cf. R15-11 Table 9), and mu
-    // differs from R12-08 Table 5 by up to ~0.6 %, well inside the 2 %
-    // significance bound of R12-08 Eq. 13 - this documents the difference.
+    // differs from R12-08 Table 5 by up to 1.5 % (at 322 kg/m3; the
+    // enhancement itself is 9 % there) - this documents the difference.
     const double T = 647.35;
     const double rho[] = {122, 222, 272, 322, 372, 422};
     const double mu[] = {25.520677, 31.337589, 36.228143, 42.961579, 45.688204, 49.436256};  // R12-08 Table 5
@@ -117,9 +124,9 @@ TEST(TransportViscosity, R12_08_Table5_WithIf97Derivatives) {
         const State st = state_from(pr, pr.p >= if97::pc ? Phase::Supercritical : Phase::Vapour);
         const double m = viscosity(st) * 1e6;
         worst = std::max(worst, rel(m, mu[i]));
-        EXPECT_LT(rel(m, mu[i]), 0.01) << rho[i];
+        EXPECT_LT(rel(m, mu[i]), 0.02) << rho[i];
     }
-    RecordProperty("max_rel_dev_vs_R12_08_Table5", std::to_string(worst));
+    RecordProperty("max_rel_dev_vs_R12_08_Table5", g(worst));
 }
 
 // ---------------------------------------------------------------------------
@@ -269,9 +276,9 @@ TEST(TransportViscosity, EnhancementOnlyNearCritical) {
     EXPECT_GT(viscosity(st), viscosity_rhoT(st.rho, st.T) * 1.001);
     // Along the boundary of R12-08 Sec. 2.8 footnote 2 (where we switch
     // mu_2 on), mu_2 computed the industrial way is ~1: the switch leaves a
-    // jump of at most 5e-5 relative (the release quotes < 0.0051 % for
-    // IAPWS-95 derivatives). Points on the region-3 part of the curve,
-    // outside the saturation dome.
+    // jump of at most 6e-5 relative (the release quotes < 0.0051 % for
+    // IAPWS-95 derivatives; with IF97 ones we observe 5.3e-5). Points on the
+    // region-3 part of the curve, outside the saturation dome.
     double worst = 0;
     for (double rho = 100; rho <= 560; rho += 5) {
         const double Tb = 457.95895935062 + rho * (1.68077273385305 +
@@ -282,8 +289,8 @@ TEST(TransportViscosity, EnhancementOnlyNearCritical) {
                            viscosity_rhoT(rho, Tb);
         worst = std::max(worst, mu2 - 1.0);
     }
-    EXPECT_LT(worst, 5e-5);
-    RecordProperty("max_mu2_minus_1_on_boundary", std::to_string(worst));
+    EXPECT_LT(worst, 6e-5);
+    RecordProperty("max_mu2_minus_1_on_boundary", g(worst));
 }
 
 // ---------------------------------------------------------------------------
@@ -342,10 +349,11 @@ TEST(TransportDerived, Definitions) {
         EXPECT_DOUBLE_EQ(t.nu, mu / st.rho);
         EXPECT_DOUBLE_EQ(t.Pr, prandtl(st));
     }
-    // Liquid water at 0.1 MPa, 300 K: Pr ~ 5.9, nu ~ 0.86e-6 m2/s (common practice).
+    // Liquid water at 0.1 MPa, 300 K: python3-iapws 1.5.2 (Debian),
+    // IAPWS97(P=0.1, T=300).Prandt and .nu.
     const State w = state_pT(0.1, 300.0);
-    EXPECT_NEAR(prandtl(w), 5.86, 0.05);
-    EXPECT_NEAR(kinematic_viscosity(w), 0.857e-6, 0.005e-6);
+    EXPECT_LT(rel(prandtl(w), 5.856570924342566), 1e-8);
+    EXPECT_LT(rel(kinematic_viscosity(w), 8.56691551589067e-07), 1e-8);
 }
 
 TEST(TransportRange, OutsideTheReleases) {
@@ -415,12 +423,12 @@ TEST(TransportTwoPhase, SaturatedValues) {
     EXPECT_DOUBLE_EQ(conductivity(x1), conductivity_vap(sat));
     EXPECT_DOUBLE_EQ(transport_liq(sat).mu, viscosity_liq(sat));
     EXPECT_DOUBLE_EQ(transport_vap(sat).lambda, conductivity_vap(sat));
-    // Saturated liquid at 1 MPa (453.03 K): mu ~ 150 uPa s, lambda ~ 0.673
-    // W/(m K); vapour: mu ~ 15.0 uPa s, lambda ~ 0.0364 W/(m K) (from memory).
-    EXPECT_NEAR(viscosity_liq(sat) * 1e6, 150.0, 2.0);
-    EXPECT_NEAR(conductivity_liq(sat), 0.673, 0.005);
-    EXPECT_NEAR(viscosity_vap(sat) * 1e6, 15.0, 0.3);
-    EXPECT_NEAR(conductivity_vap(sat), 0.0364, 0.001);
+    // Saturated liquid and vapour at 1 MPa: python3-iapws 1.5.2 (Debian),
+    // IAPWS97(P=1, x=0) and (P=1, x=1).
+    EXPECT_LT(rel(viscosity_liq(sat), 0.00015048492650911215), 1e-8);
+    EXPECT_LT(rel(conductivity_liq(sat), 0.6713377268728475), 1e-8);
+    EXPECT_LT(rel(viscosity_vap(sat), 1.4981316222701132e-05), 1e-8);
+    EXPECT_LT(rel(conductivity_vap(sat), 0.03481247626435252), 1e-8);
     // A single-phase state is not a saturation state.
     try {
         viscosity_liq(state_pT(1.0, 400.0));
@@ -441,22 +449,31 @@ TEST(TransportTwoPhase, SaturatedValues) {
 // ---------------------------------------------------------------------------
 
 TEST(TransportOracle, Iapws97Python) {
-    // 2800 single-phase states from (p, T) in regions 1, 2, 3 and 5 (up to
-    // 1173.15 K) and 300 saturation temperatures 273.16-640 K (liquid and
-    // vapour), generated by tests/oracle/gen_transport.py. Left out there:
-    // the near-critical band 640 K < T < 720 K with 150 < rho < 550 kg/m3 and
-    // saturation above 640 K, where the library evaluates the critical terms
-    // its own way (it does not follow the industrial zeta(T_R) of R15-11 Eq. 25
-    // everywhere and applies mu_2 differently) - there the two may legitimately
-    // differ. Outside the band both use IF97 and the same correlations, so
-    // the agreement is limited by the IF97 state (density iterations) only:
-    // tolerance 1e-7 relative on mu and lambda, 1e-9 on sigma. Observed
-    // maxima are recorded as test properties.
+    // tests/data/transport_oracle.csv, from tests/oracle/gen_transport.py:
+    // 2600 single-phase (p, T) states in regions 1-3 (273.15-1073.15 K,
+    // 1 kPa-100 MPa), 400 more around the critical point (640-720 K,
+    // 18-40 MPa), 200 in region 5 up to 1173.15 K, and saturated liquid and
+    // vapour at 300 temperatures 273.16-623.15 K.
+    // Near-critical band: inside the region of R12-08 Sec. 2.8 footnote 2 we
+    // apply mu_2 and the library (following R12-08 Sec. 3) sets mu_2 = 1;
+    // there mu is left out of the direct comparison and compared after
+    // dividing out our mu_2 (which must stay below 1.05 in these states).
+    // Outside it mu_2 must be exactly 1. lambda is compared everywhere: both
+    // follow the R15-11 industrial form. The library's region-3 saturated
+    // densities are not exact solutions of IF97 Eq. 28 (~1e-5 off), so the
+    // generator stops saturation at 623.15 K.
+    // Tolerance 1e-9 relative: both sides use IF97 and the same correlations,
+    // so only the convergence of the density iterations differs (observed
+    // max: mu 2.6e-13, lambda 3.7e-11, sigma 2.2e-16).
     std::ifstream in(std::string(ISENTRA_TEST_DATA_DIR) + "/transport_oracle.csv");
     ASSERT_TRUE(in.good());
+    const auto inside_mu2_region = [](double rho, double T) {  // R12-08 Sec. 2.8 footnote 2
+        return T < 457.95895935062 + rho * (1.68077273385305 +
+                                            rho * (-3.24405775203984e-3 + rho * 1.43032446173023e-6));
+    };
     std::string line;
-    int n = 0;
-    double max_mu = 0, max_k = 0, max_sigma = 0;
+    int n = 0, n_mu2 = 0;
+    double max_mu = 0, max_k = 0, max_sigma = 0, max_mu2 = 1;
     while (std::getline(in, line)) {
         if (line.empty() || line[0] == '#' || line.rfind("kind", 0) == 0) continue;
         std::stringstream ss(line);
@@ -467,31 +484,48 @@ TEST(TransportOracle, Iapws97Python) {
         const double p = std::stod(c[0]), T = std::stod(c[1]);
         const double mu = std::stod(c[4]), k = std::stod(c[5]);
         Transport t;
+        double rho = 0;
+        int region = 0;
         if (kind == "pT") {
             const State st = state_pT(p, T);
             EXPECT_EQ(st.region, std::stoi(c[2])) << line;
             t = transport(st);
+            rho = st.rho;
+            region = st.region;
         } else {
             const State sat = saturation_T(T);
             t = kind == "liq" ? transport_liq(sat) : transport_vap(sat);
+            rho = kind == "liq" ? sat.liq.rho : sat.vap.rho;
+            region = kind == "liq" ? sat.liq.region : sat.vap.region;
             if (kind == "liq") {
                 const double sg = std::stod(c[7]);
                 max_sigma = std::max(max_sigma, rel(surface_tension(T), sg));
                 EXPECT_LT(rel(surface_tension(T), sg), 1e-9) << line;
             }
         }
-        const double dmu = rel(t.mu, mu), dk = rel(t.lambda, k);
+        const double mu2 = t.mu / viscosity_rhoT(rho, T);
+        if (region != 5 && inside_mu2_region(rho, T)) {
+            ++n_mu2;
+            max_mu2 = std::max(max_mu2, mu2);
+            EXPECT_GE(mu2, 1.0) << line;
+            EXPECT_LT(mu2, 1.05) << line;
+        } else {
+            EXPECT_EQ(mu2, 1.0) << line;
+        }
+        const double dmu = rel(t.mu / mu2, mu), dk = rel(t.lambda, k);
         max_mu = std::max(max_mu, dmu);
         max_k = std::max(max_k, dk);
-        EXPECT_LT(dmu, 1e-7) << line;
-        EXPECT_LT(dk, 1e-7) << line;
+        EXPECT_LT(dmu, 1e-9) << line;
+        EXPECT_LT(dk, 1e-9) << line;
         ++n;
     }
-    EXPECT_GE(n, 3000);
+    EXPECT_EQ(n, 3800);
+    EXPECT_GT(n_mu2, 50);
     RecordProperty("rows", n);
-    RecordProperty("max_rel_dev_mu", std::to_string(max_mu));
-    RecordProperty("max_rel_dev_lambda", std::to_string(max_k));
-    RecordProperty("max_rel_dev_sigma", std::to_string(max_sigma));
-    std::printf("transport oracle: %d rows, max rel dev mu %.3g, lambda %.3g, sigma %.3g\n", n,
-                max_mu, max_k, max_sigma);
+    RecordProperty("max_rel_dev_mu", g(max_mu));
+    RecordProperty("max_rel_dev_lambda", g(max_k));
+    RecordProperty("max_rel_dev_sigma", g(max_sigma));
+    std::printf("transport oracle: %d rows (%d with mu_2 applied, max mu_2 %.4f), max rel dev "
+                "mu %.2g, lambda %.2g, sigma %.2g\n",
+                n, n_mu2, max_mu2, max_mu, max_k, max_sigma);
 }
