@@ -1,0 +1,525 @@
+// SPDX-License-Identifier: MPL-2.0
+// Round trips through the state solver (state.hpp) on dense grids, for every
+// input pair, plus the phase decision right at the saturation line and the
+// error behaviour at the edges of IF97's range.
+//
+// These tests compare the solver with itself (no external values): a state
+// made from one input pair must come back from every other pair.
+// Tolerances (the project's accuracy targets, not to be loosened):
+//   T back within 1e-6 K; p back within 1e-9 relative; x back within 1e-9;
+//   h(p, T(p,h)) = h and s(p, T(p,s)) = s within 1e-9 relative.
+// Ranges and limits: IAPWS R7-97(2012) Sections 1-2 (273.15 K <= T <=
+// 1073.15 K for p <= 100 MPa; 1073.15 K < T <= 2273.15 K for p <= 50 MPa),
+// critical point pc = 22.064 MPa, Tc = 647.096 K (R7-97(2012) Eqs. 1-2).
+#include <gtest/gtest.h>
+
+#include <algorithm>
+#include <cmath>
+#include <cstdarg>
+#include <cstdio>
+#include <limits>
+#include <map>
+#include <string>
+#include <vector>
+
+#include "isentra/error.hpp"
+#include "isentra/if97.hpp"
+#include "isentra/state.hpp"
+
+namespace {
+
+using isentra::Phase;
+using isentra::State;
+namespace if97 = isentra::if97;
+
+constexpr double kTolT = 1e-6;  // K
+constexpr double kRel = 1e-9;   // relative (p, h, s), absolute (x)
+constexpr double kPs623 = if97::ps_623;  // 16.529 MPa, R7-97(2012) Sec. 4
+
+// Collects failures of one test; prints a count, a count per category and
+// the first few failures.
+class Fails {
+public:
+    explicit Fails(std::string name) : name_(std::move(name)) {}
+    // Category of the following checks (e.g. "ph region 3"), for the summary.
+    void category(std::string c) { cat_ = std::move(c); }
+    void check(bool ok, const char* fmt, ...) __attribute__((format(printf, 3, 4))) {
+        ++checks_;
+        if (ok) return;
+        ++fails_;
+        ++by_cat_[cat_];
+        if (fails_ <= 15) {
+            char buf[512];
+            va_list ap;
+            va_start(ap, fmt);
+            std::vsnprintf(buf, sizeof buf, fmt, ap);
+            va_end(ap);
+            ADD_FAILURE() << name_ << ": " << buf;
+        }
+    }
+    void finish() {
+        std::printf("[roundtrip %s] %zu checks, %zu failing\n", name_.c_str(), checks_, fails_);
+        for (const auto& [c, n] : by_cat_)
+            std::printf("[roundtrip %s]   %6zu failing in %s\n", name_.c_str(), n, c.c_str());
+        ::testing::Test::RecordProperty("checks", static_cast<int>(checks_));
+        ::testing::Test::RecordProperty("failing", static_cast<int>(fails_));
+        EXPECT_GT(checks_, 0u);
+        EXPECT_EQ(fails_, 0u) << name_ << ": " << fails_ << " of " << checks_ << " checks failed";
+    }
+
+private:
+    std::string name_, cat_ = "-";
+    std::size_t checks_ = 0, fails_ = 0;
+    std::map<std::string, std::size_t> by_cat_;
+};
+
+double rel(double a, double b) { return std::fabs(a - b) / std::fabs(b); }
+
+// Relative deviation of h (kJ/kg) or s (kJ/(kg K)) with a denominator of at
+// least 1 unit: h, u and s cross zero at the IF97 reference state (u' = s' = 0
+// at the triple point), where a pure relative error means nothing; there the
+// same 1e-9 applies as an absolute error.
+double rel1(double a, double b) { return std::fabs(a - b) / std::max(std::fabs(b), 1.0); }
+
+bool finite_core(const State& st) {
+    return std::isfinite(st.h) && std::isfinite(st.s) && std::isfinite(st.v) &&
+           std::isfinite(st.T) && std::isfinite(st.p);
+}
+
+const char* ph(Phase p) { return isentra::phase_name(p); }
+
+// Runs fn, turning an exception into a failure. Returns false if it threw.
+template <class Fn>
+bool guarded(Fails& f, const char* what, double a, double b, Fn fn) {
+    try {
+        fn();
+        return true;
+    } catch (const std::exception& e) {
+        f.check(false, "%s(%.17g, %.17g) threw: %s", what, a, b, e.what());
+        return false;
+    }
+}
+
+std::vector<double> linspace(double a, double b, int n) {
+    std::vector<double> v;
+    for (int i = 0; i < n; ++i) v.push_back(a + (b - a) * i / (n - 1));
+    return v;
+}
+
+std::vector<double> logspace(double a, double b, int n) {
+    std::vector<double> v;
+    for (int i = 0; i < n; ++i) v.push_back(a * std::pow(b / a, double(i) / (n - 1)));
+    return v;
+}
+
+// Temperatures across regions 1, 2, 3 and 5, denser at 623.15 K, Tc,
+// 863.15 K and 1073.15 K (common practice for boundary coverage).
+std::vector<double> grid_T() {
+    std::vector<double> T;
+    for (double t : linspace(273.16, 620.0, 36)) T.push_back(t);
+    for (double t : linspace(625.0, 860.0, 48)) T.push_back(t);
+    for (double t : linspace(870.0, 1070.0, 11)) T.push_back(t);
+    for (double t : linspace(1080.0, 2273.15, 25)) T.push_back(t);
+    for (double d : {-1.0, -1e-3, 1e-3, 0.1, 1.0}) T.push_back(if97::T_13 + d);
+    for (double d : {-1.0, -0.1, -0.01, 0.01, 0.1, 1.0}) T.push_back(if97::Tc + d);
+    for (double d : {-1e-3, 1e-3, 0.5}) T.push_back(if97::T_25 + d);
+    for (double d : {-0.5, -1e-3}) T.push_back(863.15 + d);
+    T.push_back(273.15);
+    T.push_back(2273.15);
+    return T;
+}
+
+std::vector<double> grid_p() {
+    std::vector<double> p = logspace(1e-3, 100.0, 45);
+    for (double q : {kPs623 * 0.999, kPs623 * 1.001, 18.0, 20.0, 21.5, 22.0, 22.06, 22.064,
+                     22.07, 22.1, 23.0, 25.0, 30.0, 50.0})
+        p.push_back(q);
+    return p;
+}
+
+// A single-phase (p,T) of the grid inside IF97's range and not within
+// 1e-6 relative of the saturation line.
+bool usable(double p, double T) {
+    if (T > if97::T_25 && p > if97::p_max5) return false;
+    if (p > if97::p_max) return false;
+    if (T < if97::Tc && p < if97::pc) {
+        if (T < 273.16 && p < 611.657e-6) return false;
+        const double ps = if97::psat(T);
+        if (std::fabs(p - ps) < 1e-6 * ps) return false;
+    }
+    return true;
+}
+
+bool same_phase_kind(Phase a, Phase b) { return a == b; }
+
+}  // namespace
+
+TEST(RoundTripSinglePhase, PhPsHsRecoverTemperatureAndPressure) {
+    Fails f("single-phase");
+    std::size_t n = 0;
+    for (double T : grid_T()) {
+        for (double p : grid_p()) {
+            if (!usable(p, T)) continue;
+            State a;
+            f.category("pT");
+            if (!guarded(f, "state_pT", p, T, [&] { a = isentra::state_pT(p, T); })) continue;
+            ++n;
+            const std::string reg = " region " + std::to_string(a.region);
+            f.check(finite_core(a), "state_pT(%.17g, %.17g) has NaN", p, T);
+            f.check(a.phase != Phase::TwoPhase, "state_pT(%.17g, %.17g) is TwoPhase", p, T);
+
+            // (p,h)
+            State b;
+            f.category("ph" + reg);
+            if (guarded(f, "state_ph", p, a.h, [&] { b = isentra::state_ph(p, a.h); })) {
+                f.check(finite_core(b), "state_ph(%.17g, %.17g) has NaN", p, a.h);
+                f.check(std::fabs(b.T - T) <= kTolT,
+                        "state_ph(%.17g, %.17g).T = %.17g, want %.17g (region %d)", p, a.h, b.T, T,
+                        a.region);
+                f.check(same_phase_kind(b.phase, a.phase),
+                        "state_ph(%.17g, %.17g).phase = %s, want %s", p, a.h, ph(b.phase),
+                        ph(a.phase));
+                State c;
+                if (guarded(f, "state_pT", p, b.T, [&] { c = isentra::state_pT(p, b.T); }))
+                    f.check(rel1(c.h, a.h) <= kRel, "h(p, T(p,h)) = %.17g, h = %.17g at p=%.17g T=%.17g",
+                            c.h, a.h, p, T);
+            }
+            // (p,s)
+            f.category("ps" + reg);
+            if (guarded(f, "state_ps", p, a.s, [&] { b = isentra::state_ps(p, a.s); })) {
+                f.check(finite_core(b), "state_ps(%.17g, %.17g) has NaN", p, a.s);
+                f.check(std::fabs(b.T - T) <= kTolT,
+                        "state_ps(%.17g, %.17g).T = %.17g, want %.17g (region %d)", p, a.s, b.T, T,
+                        a.region);
+                f.check(same_phase_kind(b.phase, a.phase),
+                        "state_ps(%.17g, %.17g).phase = %s, want %s", p, a.s, ph(b.phase),
+                        ph(a.phase));
+                State c;
+                if (guarded(f, "state_pT", p, b.T, [&] { c = isentra::state_pT(p, b.T); }))
+                    f.check(rel1(c.s, a.s) <= kRel, "s(p, T(p,s)) = %.17g, s = %.17g at p=%.17g T=%.17g",
+                            c.s, a.s, p, T);
+            }
+            // (h,s)
+            f.category("hs" + reg);
+            if (guarded(f, "state_hs", a.h, a.s, [&] { b = isentra::state_hs(a.h, a.s); })) {
+                f.check(finite_core(b), "state_hs(%.17g, %.17g) has NaN", a.h, a.s);
+                f.check(std::fabs(b.T - T) <= kTolT && rel(b.p, p) <= kRel,
+                        "state_hs(%.17g, %.17g) -> p=%.17g T=%.17g, want p=%.17g T=%.17g (region %d)",
+                        a.h, a.s, b.p, b.T, p, T, a.region);
+                f.check(same_phase_kind(b.phase, a.phase),
+                        "state_hs(%.17g, %.17g).phase = %s, want %s", a.h, a.s, ph(b.phase),
+                        ph(a.phase));
+            }
+        }
+    }
+    std::printf("[roundtrip single-phase] %zu (p,T) states\n", n);
+    EXPECT_GT(n, 3000u);
+    f.finish();
+}
+
+// States 1e-6 relative off the B23 boundary on both sides (R7-97(2012) Eq. 5).
+TEST(RoundTripSinglePhase, AcrossB23) {
+    Fails f("B23");
+    for (double T : linspace(623.2, 863.1, 60)) {
+        for (double side : {-1e-6, 1e-6}) {
+            const double p = if97::b23_p(T) * (1 + side);
+            if (p > if97::p_max || !usable(p, T)) continue;
+            State a;
+            if (!guarded(f, "state_pT", p, T, [&] { a = isentra::state_pT(p, T); })) continue;
+            f.check(a.region == (side > 0 ? 3 : 2), "state_pT(%.17g, %.17g).region = %d", p, T,
+                    a.region);
+            const std::string side_name = side > 0 ? " region-3 side" : " region-2 side";
+            State b;
+            f.category("ph" + side_name);
+            if (guarded(f, "state_ph", p, a.h, [&] { b = isentra::state_ph(p, a.h); }))
+                f.check(std::fabs(b.T - T) <= kTolT && b.region == a.region,
+                        "state_ph(%.17g, %.17g) -> T=%.17g region %d, want %.17g region %d", p, a.h,
+                        b.T, b.region, T, a.region);
+            f.category("ps" + side_name);
+            if (guarded(f, "state_ps", p, a.s, [&] { b = isentra::state_ps(p, a.s); }))
+                f.check(std::fabs(b.T - T) <= kTolT && b.region == a.region,
+                        "state_ps(%.17g, %.17g) -> T=%.17g region %d, want %.17g region %d", p, a.s,
+                        b.T, b.region, T, a.region);
+            f.category("hs" + side_name);
+            if (guarded(f, "state_hs", a.h, a.s, [&] { b = isentra::state_hs(a.h, a.s); }))
+                f.check(std::fabs(b.T - T) <= kTolT && rel(b.p, p) <= kRel,
+                        "state_hs(%.17g, %.17g) -> p=%.17g T=%.17g, want p=%.17g T=%.17g", a.h,
+                        a.s, b.p, b.T, p, T);
+        }
+    }
+    f.finish();
+}
+
+// Wet states from (p,x) and (T,x), fed back into (p,h), (p,s) and (h,s).
+TEST(RoundTripWet, PxTxFedBack) {
+    Fails f("wet");
+    std::vector<double> ps = logspace(611.657e-6 * 1.0001, 16.0, 40);
+    for (double q : {kPs623 * 0.9999, kPs623 * 1.0001, 17.0, 18.0, 19.0, 20.0, 21.0, 21.5, 21.9,
+                     22.0, 22.05, 22.06})
+        ps.push_back(q);
+    std::vector<double> Ts = linspace(273.16, 640.0, 40);
+    for (double t : {623.14, 623.16, 645.0, 646.0, 646.9, 647.0, 647.09}) Ts.push_back(t);
+    const std::vector<double> xs = {0.0, 1e-6, 0.01, 0.1, 0.25, 0.5, 0.75, 0.9, 0.99, 1 - 1e-6, 1.0};
+
+    auto feed_back = [&](const State& a, const char* from, double in1, double x) {
+        f.check(finite_core(a), "%s(%.17g, %.17g) has NaN", from, in1, x);
+        f.check(a.phase == Phase::TwoPhase, "%s(%.17g, %.17g).phase = %s", from, in1, x,
+                ph(a.phase));
+        f.check(std::fabs(a.x - x) <= kRel, "%s(%.17g, %.17g).x = %.17g", from, in1, x, a.x);
+        const bool interior = x > 0 && x < 1;  // (h,s) on a saturation line is a boundary
+        const std::string band = a.p > kPs623 ? " p>16.529" : " p<=16.529";
+        State b;
+        f.category(std::string(from) + "->ph" + band);
+        if (guarded(f, "state_ph", a.p, a.h, [&] { b = isentra::state_ph(a.p, a.h); })) {
+            f.check(finite_core(b), "state_ph(%.17g, %.17g) has NaN", a.p, a.h);
+            f.check(b.phase == Phase::TwoPhase && std::fabs(b.x - x) <= kRel &&
+                        std::fabs(b.T - a.T) <= kTolT,
+                    "state_ph(%.17g, %.17g) -> %s x=%.17g T=%.17g, want TwoPhase x=%.17g T=%.17g "
+                    "[from %s]",
+                    a.p, a.h, ph(b.phase), b.x, b.T, x, a.T, from);
+        }
+        f.category(std::string(from) + "->ps" + band);
+        if (guarded(f, "state_ps", a.p, a.s, [&] { b = isentra::state_ps(a.p, a.s); })) {
+            f.check(finite_core(b), "state_ps(%.17g, %.17g) has NaN", a.p, a.s);
+            f.check(b.phase == Phase::TwoPhase && std::fabs(b.x - x) <= kRel &&
+                        std::fabs(b.T - a.T) <= kTolT,
+                    "state_ps(%.17g, %.17g) -> %s x=%.17g T=%.17g, want TwoPhase x=%.17g T=%.17g "
+                    "[from %s]",
+                    a.p, a.s, ph(b.phase), b.x, b.T, x, a.T, from);
+        }
+        f.category(std::string(from) + "->hs" + band);
+        if (interior &&
+            guarded(f, "state_hs", a.h, a.s, [&] { b = isentra::state_hs(a.h, a.s); })) {
+            f.check(finite_core(b), "state_hs(%.17g, %.17g) has NaN", a.h, a.s);
+            f.check(b.phase == Phase::TwoPhase && std::fabs(b.x - x) <= kRel &&
+                        rel(b.p, a.p) <= kRel && std::fabs(b.T - a.T) <= kTolT,
+                    "state_hs(%.17g, %.17g) -> %s x=%.17g p=%.17g T=%.17g, want TwoPhase "
+                    "x=%.17g p=%.17g T=%.17g [from %s]",
+                    a.h, a.s, ph(b.phase), b.x, b.p, b.T, x, a.p, a.T, from);
+        }
+    };
+
+    for (double p : ps)
+        for (double x : xs) {
+            State a;
+            f.category("px");
+            if (guarded(f, "state_px", p, x, [&] { a = isentra::state_px(p, x); }))
+                feed_back(a, "state_px", p, x);
+        }
+    for (double T : Ts)
+        for (double x : xs) {
+            State a;
+            f.category("Tx");
+            if (guarded(f, "state_Tx", T, x, [&] { a = isentra::state_Tx(T, x); }))
+                feed_back(a, "state_Tx", T, x);
+        }
+    f.finish();
+}
+
+// (p,x) and (T,x) describe the same states: T(p,x) = tsat(p), p(T,x) = psat(T).
+TEST(RoundTripWet, PxAgreesWithTx) {
+    Fails f("px-vs-Tx");
+    for (double p : logspace(1e-3, 22.06, 50)) {
+        for (double x : {0.0, 0.3, 1.0}) {
+            State a, b;
+            if (!guarded(f, "state_px", p, x, [&] { a = isentra::state_px(p, x); })) continue;
+            if (!guarded(f, "state_Tx", a.T, x, [&] { b = isentra::state_Tx(a.T, x); })) continue;
+            f.check(rel(b.p, p) <= kRel && rel1(b.h, a.h) <= kRel && rel1(b.s, a.s) <= kRel &&
+                        rel(b.v, a.v) <= kRel,
+                    "state_Tx(%.17g, %g): p=%.17g h=%.17g s=%.17g v=%.17g; state_px(%.17g): "
+                    "h=%.17g s=%.17g v=%.17g",
+                    a.T, x, b.p, b.h, b.s, b.v, p, a.h, a.s, a.v);
+        }
+    }
+    f.finish();
+}
+
+// 1e-9 relative off each side of the saturated liquid and saturated vapour
+// lines, in h and in s: the phase must come out right, below and above
+// 16.529 MPa and close to the critical point.
+TEST(RoundTripSaturationEdge, PhaseJustOffTheLine) {
+    Fails f("sat-edge");
+    std::vector<double> ps = logspace(1e-3, 16.0, 30);
+    for (double q : {kPs623 * 0.99999, kPs623 * 1.00001, 17.0, 18.0, 19.0, 20.0, 21.0, 21.5, 22.0,
+                     22.05, 22.06, 22.063, 22.0639, 22.06399})
+        ps.push_back(q);
+    const double off = 1e-9;
+    for (double p : ps) {
+        State sat;
+        if (!guarded(f, "saturation_p", p, 0, [&] { sat = isentra::saturation_p(p); })) continue;
+        const double hl = sat.liq.h, hv = sat.vap.h, sl = sat.liq.s, sv = sat.vap.s;
+        f.check(hl < hv && sl < sv, "saturation_p(%.17g): h'=%.17g h''=%.17g s'=%.17g s''=%.17g",
+                p, hl, hv, sl, sv);
+        struct Case {
+            const char* name;
+            double value;
+            Phase want;
+        };
+        const Case hcases[] = {{"h'(1-1e-9)", hl * (1 - off), Phase::Liquid},
+                               {"h'(1+1e-9)", hl * (1 + off), Phase::TwoPhase},
+                               {"h''(1-1e-9)", hv * (1 - off), Phase::TwoPhase},
+                               {"h''(1+1e-9)", hv * (1 + off), Phase::Vapour}};
+        const Case scases[] = {{"s'(1-1e-9)", sl * (1 - off), Phase::Liquid},
+                               {"s'(1+1e-9)", sl * (1 + off), Phase::TwoPhase},
+                               {"s''(1-1e-9)", sv * (1 - off), Phase::TwoPhase},
+                               {"s''(1+1e-9)", sv * (1 + off), Phase::Vapour}};
+        const std::string band = p > kPs623 ? " p>16.529" : " p<=16.529";
+        for (const Case& c : hcases) {
+            State b;
+            f.category(std::string("ph ") + c.name + band);
+            if (!guarded(f, "state_ph", p, c.value, [&] { b = isentra::state_ph(p, c.value); }))
+                continue;
+            f.check(finite_core(b), "state_ph(%.17g, %.17g) has NaN", p, c.value);
+            f.check(b.phase == c.want, "state_ph(p=%.17g, %s=%.17g).phase = %s, want %s", p,
+                    c.name, c.value, ph(b.phase), ph(c.want));
+            f.check(rel1(b.h, c.value) <= kRel, "state_ph(p=%.17g, %s=%.17g).h = %.17g", p, c.name,
+                    c.value, b.h);
+            if (c.want == Phase::TwoPhase)
+                f.check(b.x >= 0 && b.x <= 1 && (c.value < hl + 0.5 * (hv - hl) ? b.x < 1e-6 : b.x > 1 - 1e-6),
+                        "state_ph(p=%.17g, %s).x = %.17g", p, c.name, b.x);
+            else
+                f.check(std::fabs(b.T - sat.T) < 1e-3 &&
+                            (c.want == Phase::Liquid ? b.T <= sat.T + kTolT : b.T >= sat.T - kTolT),
+                        "state_ph(p=%.17g, %s).T = %.17g, Tsat = %.17g", p, c.name, b.T, sat.T);
+            // The same state from (h,s) must land on the same side.
+            State d;
+            f.category(std::string("hs ") + c.name + band);
+            if (c.want != Phase::TwoPhase &&
+                guarded(f, "state_hs", b.h, b.s, [&] { d = isentra::state_hs(b.h, b.s); })) {
+                f.check(d.phase == c.want && rel(d.p, p) <= kRel && std::fabs(d.T - b.T) <= kTolT,
+                        "state_hs(%.17g, %.17g) [p=%.17g, %s] -> %s p=%.17g T=%.17g, want %s "
+                        "p=%.17g T=%.17g",
+                        b.h, b.s, p, c.name, ph(d.phase), d.p, d.T, ph(c.want), p, b.T);
+            }
+        }
+        for (const Case& c : scases) {
+            State b;
+            f.category(std::string("ps ") + c.name + band);
+            if (!guarded(f, "state_ps", p, c.value, [&] { b = isentra::state_ps(p, c.value); }))
+                continue;
+            f.check(finite_core(b), "state_ps(%.17g, %.17g) has NaN", p, c.value);
+            f.check(b.phase == c.want, "state_ps(p=%.17g, %s=%.17g).phase = %s, want %s", p,
+                    c.name, c.value, ph(b.phase), ph(c.want));
+            f.check(rel1(b.s, c.value) <= kRel, "state_ps(p=%.17g, %s=%.17g).s = %.17g", p, c.name,
+                    c.value, b.s);
+        }
+    }
+    f.finish();
+}
+
+// Around the critical point: supercritical states (p >= pc) and states just
+// below pc round-trip through every pair.
+TEST(RoundTripCritical, AroundTheCriticalPoint) {
+    Fails f("critical");
+    for (double p : {21.9, 22.0, 22.05, 22.063, 22.064, 22.065, 22.07, 22.1, 22.5, 23.0}) {
+        for (double dT : {-2.0, -0.5, -0.1, -0.01, 0.0, 0.01, 0.1, 0.5, 2.0, 5.0}) {
+            const double T = if97::Tc + dT;
+            if (!usable(p, T)) continue;
+            if (p == if97::pc && T == if97::Tc) continue;  // the critical point itself
+            State a;
+            f.category(p >= if97::pc ? "pT p>=pc" : "pT p<pc");
+            if (!guarded(f, "state_pT", p, T, [&] { a = isentra::state_pT(p, T); })) continue;
+            f.check(finite_core(a), "state_pT(%.17g, %.17g) has NaN", p, T);
+            if (p >= if97::pc)
+                f.check(a.phase == Phase::Supercritical, "state_pT(%.17g, %.17g).phase = %s", p, T,
+                        ph(a.phase));
+            State b;
+            f.category("ph/ps/hs");
+            if (guarded(f, "state_ph", p, a.h, [&] { b = isentra::state_ph(p, a.h); }))
+                f.check(std::fabs(b.T - T) <= kTolT && b.phase == a.phase && rel1(b.h, a.h) <= kRel,
+                        "state_ph(%.17g, %.17g) -> T=%.17g %s, want T=%.17g %s", p, a.h, b.T,
+                        ph(b.phase), T, ph(a.phase));
+            if (guarded(f, "state_ps", p, a.s, [&] { b = isentra::state_ps(p, a.s); }))
+                f.check(std::fabs(b.T - T) <= kTolT && b.phase == a.phase && rel1(b.s, a.s) <= kRel,
+                        "state_ps(%.17g, %.17g) -> T=%.17g %s, want T=%.17g %s", p, a.s, b.T,
+                        ph(b.phase), T, ph(a.phase));
+            if (guarded(f, "state_hs", a.h, a.s, [&] { b = isentra::state_hs(a.h, a.s); }))
+                f.check(std::fabs(b.T - T) <= kTolT && rel(b.p, p) <= kRel && b.phase == a.phase,
+                        "state_hs(%.17g, %.17g) -> p=%.17g T=%.17g %s, want p=%.17g T=%.17g %s",
+                        a.h, a.s, b.p, b.T, ph(b.phase), p, T, ph(a.phase));
+        }
+    }
+    // The dome closes at the critical point (state.hpp: liq == vap there).
+    State c;
+    if (guarded(f, "state_px", if97::pc, 0.5, [&] { c = isentra::state_px(if97::pc, 0.5); })) {
+        f.check(finite_core(c), "state_px(pc, 0.5) has NaN");
+        f.check(std::fabs(c.T - if97::Tc) <= 1e-6, "state_px(pc, 0.5).T = %.17g, want Tc", c.T);
+    }
+    f.finish();
+}
+
+// ---- Error behaviour ------------------------------------------------------
+
+TEST(RoundTripErrors, PTExactlyOnSaturationIsImpossible) {
+    for (double p : {0.001, 0.1, 1.0, 10.0, 16.0, 17.0, 20.0, 22.0}) {
+        const double T = if97::tsat(p);
+        try {
+            (void)isentra::state_pT(p, T);
+            ADD_FAILURE() << "state_pT(" << p << ", tsat(p) = " << T << ") did not throw";
+        } catch (const isentra::Error& e) {
+            EXPECT_EQ(e.code(), isentra::ErrorCode::Impossible)
+                << "p=" << p << " T=" << T << ": " << e.what();
+        }
+    }
+}
+
+// The same from the other side: p exactly psat(T).
+TEST(RoundTripErrors, PTWithPExactlyPsatIsImpossible) {
+    for (double T : {280.0, 373.15, 450.0, 584.0, 620.0, 625.0, 640.0, 646.9}) {
+        const double p = if97::psat(T);
+        try {
+            (void)isentra::state_pT(p, T);
+            ADD_FAILURE() << "state_pT(psat(T) = " << p << ", " << T << ") did not throw";
+        } catch (const isentra::Error& e) {
+            EXPECT_EQ(e.code(), isentra::ErrorCode::Impossible)
+                << "p=" << p << " T=" << T << ": " << e.what();
+        }
+    }
+}
+
+TEST(RoundTripErrors, QualityOutsideZeroOneThrows) {
+    for (double x : {-0.01, -1e-9, 1 + 1e-9, 1.01, 2.0}) {
+        EXPECT_THROW((void)isentra::state_px(1.0, x), isentra::Error) << "x=" << x;
+        EXPECT_THROW((void)isentra::state_Tx(450.0, x), isentra::Error) << "x=" << x;
+    }
+}
+
+TEST(RoundTripErrors, WetAboveCriticalThrows) {
+    EXPECT_THROW((void)isentra::state_px(22.064 * (1 + 1e-9), 0.5), isentra::Error);
+    EXPECT_THROW((void)isentra::state_px(22.1, 0.5), isentra::Error);
+    EXPECT_THROW((void)isentra::state_px(30.0, 0.0), isentra::Error);
+    EXPECT_THROW((void)isentra::state_Tx(647.096 + 1e-6, 0.5), isentra::Error);
+    EXPECT_THROW((void)isentra::state_Tx(700.0, 1.0), isentra::Error);
+}
+
+TEST(RoundTripErrors, OutOfRangeThrowsRangeError) {
+    // Range limits: IAPWS R7-97(2012) Section 1.
+    EXPECT_THROW((void)isentra::state_pT(-1.0, 300.0), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_pT(-1e-9, 300.0), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_ph(-1.0, 100.0), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_ps(-1.0, 1.0), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_px(-0.1, 0.5), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_pT(1.0, 273.14), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_pT(1.0, 200.0), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_Tx(273.14, 0.5), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_pT(1.0, 2273.16), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_pT(0.1, 3000.0), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_pT(50.1, 1200.0), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_pT(50.0 * (1 + 1e-9), 1073.16), isentra::RangeError);
+    EXPECT_THROW((void)isentra::state_pT(100.1, 500.0), isentra::RangeError);
+    // Just inside the limits it works.
+    EXPECT_NO_THROW((void)isentra::state_pT(50.0, 2273.15));
+    EXPECT_NO_THROW((void)isentra::state_pT(100.0, 1073.15));
+    EXPECT_NO_THROW((void)isentra::state_pT(100.0, 273.15));
+}
+
+TEST(RoundTripErrors, NaNInputThrows) {
+    const double nan = std::numeric_limits<double>::quiet_NaN();
+    EXPECT_THROW((void)isentra::state_pT(nan, 300.0), isentra::Error);
+    EXPECT_THROW((void)isentra::state_pT(1.0, nan), isentra::Error);
+    EXPECT_THROW((void)isentra::state_ph(1.0, nan), isentra::Error);
+    EXPECT_THROW((void)isentra::state_ps(nan, 1.0), isentra::Error);
+    EXPECT_THROW((void)isentra::state_hs(nan, 7.0), isentra::Error);
+    EXPECT_THROW((void)isentra::state_px(1.0, nan), isentra::Error);
+    EXPECT_THROW((void)isentra::state_Tx(nan, 0.5), isentra::Error);
+}
