@@ -56,10 +56,12 @@ void check_x(double x) {
 
 // ---- states from Props -------------------------------------------------------
 
-State from_props(const Props& pr) {
+// p_in: the pressure as given by the caller (a region-3 state's p(rho,T)
+// matches it only to the solver's tolerance).
+State from_props(const Props& pr, double p_in) {
     State st;
     st.T = pr.T;
-    st.p = pr.p;
+    st.p = p_in;
     st.v = pr.v;
     st.rho = pr.rho;
     st.u = pr.u;
@@ -72,7 +74,7 @@ State from_props(const Props& pr) {
     st.drhodp_T = pr.drhodp_T;
     st.region = pr.region;
     st.x = nan_v;
-    if (pr.p >= pc)
+    if (p_in >= pc)
         st.phase = pr.T >= Tc ? Phase::Supercritical : Phase::Liquid;
     else if (pr.T >= Tc)
         st.phase = Phase::Vapour;
@@ -212,7 +214,7 @@ State solve_T_in_region(double p, double y, Y which, int region, double lo, doub
     };
     if (!(guess >= lo && guess <= hi)) guess = 0.5 * (lo + hi);
     const double T = solve_newton(f, guess, lo, hi, which == Y::H ? "T(p,h)" : "T(p,s)");
-    return from_props(props_region(p, T, region));
+    return from_props(props_region(p, T, region), p);
 }
 
 double backward_T(double p, double y, Y which, int region) {
@@ -293,7 +295,7 @@ State state_pT(double p, double T) {
         throw Error(ErrorCode::Impossible,
                     "p and T lie exactly on the saturation line, where they do not fix the state; give the "
                     "vapour quality x (STEAM.*.PX / STEAM.*.TX) or h or s instead");
-    return from_props(props_region(p, T, r));
+    return from_props(props_region(p, T, r), p);
 }
 
 namespace {
@@ -322,8 +324,12 @@ State state_py(double p, double y, Y which) {
         const double Ts = tsat(p);
         const SatPair sp = sat_pair_T(Ts);
         const double yl = yval(sp.liq, which), yv = yval(sp.vap, which);
-        if (y >= yl && y <= yv) {
-            const double x = (y - yl) / (yv - yl);
+        // Within rounding (1e-13 of the vapour value) of a saturation value the
+        // state is that saturated state: h'(tsat(p)) and h'(T) at p = psat(T)
+        // differ in the last bits.
+        const double band = 1e-13 * std::fabs(yv);
+        if (y >= yl - band && y <= yv + band) {
+            const double x = y <= yl + band ? 0.0 : y >= yv - band ? 1.0 : (y - yl) / (yv - yl);
             State st = two_phase(sp, p, Ts, x);
             if (which == Y::H) st.h = y; else st.s = y;
             return st;
@@ -358,56 +364,99 @@ State state_ps(double p, double s) { return state_py(p, s, Y::S); }
 
 // (h,s): along an isentrope (dh/dp)_s = v > 0 in every phase, so h(p) at
 // fixed s is monotonic and continuous: solve state_ps(p, s).h = h for p.
+namespace {
+
+bool ps_valid(double p, double s, State& out) {
+    try {
+        out = state_ps(p, s);
+        return true;
+    } catch (const RangeError&) {
+        return false;
+    }
+}
+
+// Moves p towards `inside` until state_ps(p,s) is valid (a root on a range
+// boundary may sit a few ulps outside it).
+double nudge(double p, double inside, double s, State& out) {
+    for (int i = 0; i < 64; ++i) {
+        if (ps_valid(p, s, out)) return p;
+        p += (inside - p) * 1e-14 * (1 << std::min(i, 30));
+    }
+    throw Error(ErrorCode::NoConvergence, "could not place the entropy s inside the range of IAPWS-IF97");
+}
+
+// The pressure interval in which the isentrope s lies inside IAPWS-IF97's
+// range, with the states at both ends.
+void isentrope_bounds(double s, double& plo, double& phi, State& lo, State& hi) {
+    const double p_dome_min = psat(T_min);
+    // Lower end: 273.15 K, i.e. the vapour side below 611.213 Pa, the wet
+    // isotherm at 611.213 Pa, or cold compressed liquid.
+    const double s_vap_min = region2(p_dome_min, T_min).s;
+    if (s > s_vap_min) {
+        const double p_floor = 1e-12;
+        if (region2(p_floor, T_min).s < s)
+            throw RangeError("s", Quantity::SpecificEntropy, s, none, region2(p_floor, T_min).s,
+                             "(no state of IAPWS-IF97 at a pressure above 1e-6 Pa has so high an entropy)");
+        plo = solve_bracket([&](double p) { return region2(p, T_min).s - s; }, p_floor, p_dome_min,
+                            "the lowest pressure of this entropy");
+    } else if (s >= region1(p_dome_min, T_min).s) {
+        plo = p_dome_min;
+    } else {
+        // Colder than 0 degC liquid would be needed at low pressure.
+        double ta = region1(p_dome_min, T_min).s - s, tb = region1(p_max, T_min).s - s;
+        if ((ta > 0) == (tb > 0))
+            throw RangeError("s", Quantity::SpecificEntropy, s, std::min(region1(p_dome_min, T_min).s, region1(p_max, T_min).s),
+                             none, "(the state would be colder than 273.15 K at every pressure)");
+        plo = solve_bracket([&](double p) { return region1(p, T_min).s - s; }, p_dome_min, p_max,
+                            "the lowest pressure of this entropy");
+    }
+    // Upper end: 100 MPa up to 1073.15 K, the 1073.15 K isotherm from 100 to
+    // 50 MPa, 50 MPa up to 2273.15 K, then the 2273.15 K isotherm.
+    if (s <= region2(p_max, T_25).s) {
+        phi = p_max;
+    } else if (s <= region2(p_max5, T_25).s) {
+        phi = solve_bracket([&](double p) { return region2(p, T_25).s - s; }, p_max5, p_max,
+                            "the highest pressure of this entropy");
+    } else if (s <= region5(p_max5, T_max).s) {
+        phi = p_max5;
+    } else {
+        phi = solve_bracket([&](double p) { return region5(p, T_max).s - s; }, plo, p_max5,
+                            "the highest pressure of this entropy");
+    }
+    plo = nudge(plo, phi, s, lo);
+    phi = nudge(phi, plo, s, hi);
+}
+
+}  // namespace
+
 State state_hs(double h, double s) {
     check_finite("h", Quantity::SpecificEnergy, h);
     check_finite("s", Quantity::SpecificEntropy, s);
-    // Pressure interval on which (p, s) is inside the range of IAPWS-IF97.
-    auto ps_ok = [&](double p, State& out) {
-        try {
-            out = state_ps(p, s);
-            return true;
-        } catch (const RangeError&) {
-            return false;
-        }
-    };
-    State st_lo, st_hi;
-    double plo = pt, phi = p_max;
-    if (!ps_ok(plo, st_lo)) {
-        // s below the lowest entropy at the triple-point pressure (cold compressed liquid)
-        // or above the highest at 2273.15 K: find where (p,s) enters the range.
-        if (!ps_ok(phi, st_hi))
-            throw RangeError("s", Quantity::SpecificEntropy, s, none, none, "(outside the range of IAPWS-IF97 at every pressure)");
-        // Entropy too small at low p: smallest p with T(p,s) >= 273.15 K.
-        plo = solve_bracket(
-            [&](double p) { return region1(p, T_min).s - s; }, pt, p_max, "the lowest pressure for this entropy");
-        plo = std::nextafter(plo, p_max);
-        while (!ps_ok(plo, st_lo)) plo = std::nextafter(plo, p_max) * (1 + 1e-15);
-    }
-    if (!ps_ok(phi, st_hi)) {
-        // Above 50 MPa only up to 1073.15 K: highest p with T(p,s) <= 1073.15 K.
-        const double pmid = p_max5;
-        if (!ps_ok(pmid, st_hi))
-            throw RangeError("s", Quantity::SpecificEntropy, s, none, none, "(outside the range of IAPWS-IF97)");
-        phi = solve_bracket([&](double p) { return region2(p, T_25).s - s; }, p_max5, p_max,
-                            "the highest pressure for this entropy");
-        while (!ps_ok(phi, st_hi)) phi = std::nextafter(phi, pt) * (1 - 1e-15);
-    }
-    if (h < st_lo.h)
-        throw RangeError("h", Quantity::SpecificEnergy, h, st_lo.h, st_hi.h,
-                         "for this entropy (the state would lie below the triple-point pressure or outside IAPWS-IF97)");
-    if (h > st_hi.h)
-        throw RangeError("h", Quantity::SpecificEnergy, h, st_lo.h, st_hi.h, "for this entropy (the state would lie above the pressure limit of IAPWS-IF97)");
-    // Starting pressure from the backward equations where they apply.
-    double guess = nan_v;
+    double plo, phi;
+    State lo, hi;
+    isentrope_bounds(s, plo, phi, lo, hi);
+    // Within rounding of an end of the isentrope: that end.
+    const double tol = 1e-12 * std::max(1.0, std::fabs(h));
+    if (std::fabs(h - lo.h) <= tol) return lo;
+    if (std::fabs(h - hi.h) <= tol) return hi;
+    if (h < lo.h || h > hi.h)
+        throw RangeError("h", Quantity::SpecificEnergy, h, lo.h, hi.h,
+                         "for this entropy (the limits of IAPWS-IF97 along this isentrope)");
+    // Starting pressure from the backward equations (SR2-01) where they apply.
+    double guess = std::sqrt(plo * phi);
     const double g1 = region1_p_hs(h, s), g2 = region2_p_hs(h, s);
-    if (std::isfinite(g2) && g2 > plo && g2 < phi && s > 5.0) guess = g2;
-    else if (std::isfinite(g1) && g1 > plo && g1 < phi && s < 3.8) guess = g1;
-    else guess = std::sqrt(plo * phi);
+    if (s > 5.0 && std::isfinite(g2) && g2 > plo && g2 < phi) guess = g2;
+    else if (s < 3.8 && std::isfinite(g1) && g1 > plo && g1 < phi) guess = g1;
     auto f = [&](double p) {
         const State st = state_ps(p, s);
-        return std::make_pair(st.h - h, st.v * 1e3);  // kJ/kg per MPa
+        return std::make_pair(st.h - h, st.v * 1e3);  // (dh/dp)_s = v; kJ/kg per MPa
     };
-    return state_ps(solve_newton(f, guess, plo, phi, "p(h,s)"), s);
+    double p = solve_newton(f, guess, plo, phi, "p(h,s)");
+    // Within 1e-9 of the critical pressure (the accuracy to which (h,s) fixes
+    // p near the critical point): the critical pressure, so that the phase
+    // (decided by p >= pc) does not hang on the last bits.
+    if (std::fabs(p - pc) <= 1e-9 * pc) p = pc;
+    return state_ps(p, s);
 }
 
 double quality(const State& st) {
