@@ -90,7 +90,7 @@ double b_h2c3b_s(double s);   // SR4-04 Eq. 6, h''_2c3b(s)
 double b_hB13_s(double s);    // SR4-04 Eq. 7, boundary B13 h(s)
 double b_TB23_hs(double h, double s);  // SR4-04 Eq. 8, boundary B23 T(h,s)
 double region3_p_hs(double h, double s);  // SR4-04 Eqs. 1-2 (3a/3b)
-double tsat_hs(double h, double s);       // SR4-04 Eq. 9, Tsat(h,s) in the wet region, s >= 5.85
+double tsat_hs(double h, double s);       // SR4-04 Eq. 9, Tsat(h,s) in the wet region, s >= s"(623.15 K) = 5.210887825
 
 // ---- Backward v(p,T), region 3 (SR5-05(2016)) ---------------------------
 // Subregion letter 'a'..'z' (SR5-05 Table 2 and Section 3) for a region-3 (p,T).
