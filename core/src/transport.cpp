@@ -189,13 +189,18 @@ double mu2_of_xi(double xi) {
         const double d2 = d * d;
         Y = 0.2 * c * d2 * d2 * d * (1.0 - c + c * c - 765.0 / 504.0 * d2);  // Eq. 15
     } else {
-        const double psi = std::acos(1.0 / std::sqrt(1.0 + d * d));         // Eq. 17
-        const double w = std::sqrt(std::fabs((c - 1.0) / (c + 1.0))) * std::tan(0.5 * psi);  // Eq. 19
+        // Eq. 17: cos(psi_D) = (1 + (qD xi)^2)^(-1/2), so psi_D = atan(qD xi) with
+        // sin and cos by the identities (no further trigonometric calls).
+        const double cs = 1.0 / std::sqrt(1.0 + d * d);
+        const double sn = d * cs;
+        const double psi = std::atan(d);
+        const double w = std::sqrt(std::fabs((c - 1.0) / (c + 1.0))) * (sn / (1.0 + cs));  // Eq. 19
         const double L = c > 1.0 ? std::log((1.0 + w) / (1.0 - w)) : 2.0 * std::atan(std::fabs(w));  // Eq. 18
         const double c2 = c * c;
-        Y = std::sin(3.0 * psi) / 12.0 - std::sin(2.0 * psi) / (4.0 * c) +
-            (1.0 - 1.25 * c2) * std::sin(psi) / c2 -
-            ((1.0 - 1.5 * c2) * psi - std::pow(std::fabs(c2 - 1.0), 1.5) * L) / (c2 * c);  // Eq. 16
+        const double sin2 = 2.0 * sn * cs, sin3 = sn * (3.0 - 4.0 * sn * sn);
+        const double e = std::fabs(c2 - 1.0);
+        Y = sin3 / 12.0 - sin2 / (4.0 * c) + (1.0 - 1.25 * c2) * sn / c2 -
+            ((1.0 - 1.5 * c2) * psi - e * std::sqrt(e) * L) / (c2 * c);  // Eq. 16
     }
     return std::exp(x_mu * Y);  // Eq. 14
 }
@@ -273,14 +278,18 @@ const char* prop_label(Prop w) {
     }
 }
 
+// The saturated-liquid/-vapour spreadsheet functions (see catalogue.cpp).
 const char* prop_hint(Prop w) {
     switch (w) {
-    case Prop::Mu:
-    case Prop::Nu: return "STEAM.MUF.P / STEAM.MUG.P or STEAM.MUF.T / STEAM.MUG.T";
+    case Prop::Mu: return "STEAM.MUF.P / STEAM.MUG.P or STEAM.MUF.T / STEAM.MUG.T";
     case Prop::Lambda:
-    case Prop::A: return "STEAM.LAMBDAF.P / STEAM.LAMBDAG.P or STEAM.LAMBDAF.T / STEAM.LAMBDAG.T";
+        return "STEAM.LAMBDAF.P / STEAM.LAMBDAG.P or STEAM.LAMBDAF.T / STEAM.LAMBDAG.T";
+    case Prop::Nu: return "STEAM.NUF.P / STEAM.NUG.P or STEAM.NUF.T / STEAM.NUG.T";
+    case Prop::Pr: return "STEAM.PRF.P / STEAM.PRG.P or STEAM.PRF.T / STEAM.PRG.T";
+    case Prop::A:
+        return "from STEAM.LAMBDAF.P, STEAM.RHOF.P and STEAM.CPF.P (or the G and .T forms)";
     default:
-        return "STEAM.MUF.P / STEAM.MUG.P and STEAM.LAMBDAF.P / STEAM.LAMBDAG.P (or their .T forms)";
+        return "STEAM.MUF.P / STEAM.MUG.P, STEAM.LAMBDAF.P / STEAM.LAMBDAG.P and their .T forms";
     }
 }
 
@@ -290,7 +299,7 @@ void check_range(double p, double T) {
     if (!(p <= p_hi)) throw RangeError("p", Quantity::Pressure, p, NaN, p_hi, ctx);
     if (T > T_p50 + T_slack && !(p <= p_hi_hot))
         throw RangeError("p", Quantity::Pressure, p, NaN, p_hi_hot,
-                         "above 1073.15 K for transport properties (IAPWS R15-11 Eq. 27)");
+                         "for transport properties at T > 1073.15 K (IAPWS R12-08/R15-11 with IF97)");
 }
 
 // The phase a State stands for: single phase, or a saturated end (x = 0 / 1).
@@ -299,9 +308,10 @@ PhaseData single_phase(const State& st, Prop w) {
         if (st.x == 0.0) return from_props(st.liq);
         if (st.x == 1.0) return from_props(st.vap);
         throw Error(ErrorCode::NotDefined,
-                    std::string(prop_label(w)) +
-                        " of a wet-steam mixture (0 < x < 1) is not defined; use the saturated-liquid "
-                        "or saturated-vapour value (" + prop_hint(w) + ")");
+                    std::string("transport properties of a wet-steam mixture (0 < x < 1) are not "
+                                "defined (asked for: ") +
+                        prop_label(w) + "); use the saturated-liquid or saturated-vapour value (" +
+                        prop_hint(w) + ")");
     }
     return {st.rho, st.T, st.p, st.cp, st.cv, st.drhodp_T, st.region};
 }
