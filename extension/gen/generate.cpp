@@ -47,10 +47,26 @@ std::string upper(std::string s) {
     return s;
 }
 
+// Letters and digits, starting with a letter. (UNOIDL restricts where an
+// underscore may appear; method names simply do without.)
 bool is_identifier(const std::string& s) {
     if (s.empty() || !(std::isalpha(static_cast<unsigned char>(s[0])))) return false;
-    return std::all_of(s.begin(), s.end(),
-                       [](char c) { return std::isalnum(static_cast<unsigned char>(c)) || c == '_'; });
+    return std::all_of(s.begin(), s.end(), [](char c) { return std::isalnum(static_cast<unsigned char>(c)); });
+}
+
+// "p_in" -> "pIn": argument names as UNOIDL identifiers.
+std::string camel(const std::string& s) {
+    std::string r;
+    bool up = false;
+    for (char c : s) {
+        if (!std::isalnum(static_cast<unsigned char>(c))) {
+            up = !r.empty();
+            continue;
+        }
+        r += up ? static_cast<char>(std::toupper(static_cast<unsigned char>(c))) : c;
+        up = false;
+    }
+    return r;
 }
 
 // Words that cannot be UNO IDL identifiers (UNOIDL keywords) or that would
@@ -83,7 +99,7 @@ const std::set<std::string>& reserved() {
 // IDL parameter name for argument i: the catalogue's name when it is a safe
 // identifier, otherwise argN. Only documentation: Calc shows XAddIn's names.
 std::string param_name(const cat::Arg& a, std::size_t i, const std::set<std::string>& used) {
-    std::string n = a.name;
+    std::string n = camel(a.name);
     if (!is_identifier(n) || reserved().count(n) || used.count(n)) n = "arg" + std::to_string(i);
     return n;
 }
