@@ -145,9 +145,19 @@ public:
 
     void row() { ++rows_; }
 
+    // A second exact IF97 root at a region seam (see other_root): counted, not failed.
+    void seam(const Row& r, const isentra::State& st) {
+        ++seams_;
+        if (seams_ <= 3)
+            std::printf("[oracle %s]   other IF97 root at a seam, csv line %d: region %d p=%.17g "
+                        "T=%.17g (oracle: region %d p=%.17g T=%.17g)\n",
+                        kind_.c_str(), r.line, st.region, st.p, st.T, r.region, r.p, r.T);
+    }
+
     void finish() {
-        std::printf("[oracle %s] %zu states checked against %s, %zu failing\n", kind_.c_str(),
-                    rows_, kSource, failures_);
+        std::printf("[oracle %s] %zu states checked against %s, %zu failing, %zu other roots at "
+                    "region seams\n",
+                    kind_.c_str(), rows_, kSource, failures_, seams_);
         for (const auto& [q, m] : max_)
             std::printf("[oracle %s]   max deviation %-12s %.3e (csv line %d)\n", kind_.c_str(),
                         q.c_str(), m.dev, m.line);
@@ -169,7 +179,7 @@ private:
         int line = 0;
     };
     std::string kind_;
-    std::size_t rows_ = 0, failures_ = 0;
+    std::size_t rows_ = 0, failures_ = 0, seams_ = 0;
     std::map<std::string, Max> max_;
 };
 
@@ -181,6 +191,29 @@ void check_region(Tally& t, const Row& r, const isentra::State& st) {
     if (st.region != r.region)
         t.fail(r, "region " + std::to_string(st.region) + " want " + std::to_string(r.region));
 }
+
+// IF97's regions meet at seams (T = 623.15 K between 1 and 3, B23 between 2
+// and 3, T = 1073.15 K between 2 and 5) where the two equations agree only
+// within the consistency limits of R7-97(2012); close to a seam an inverse
+// pair can have two exact solutions, one in each region, some mK apart. A
+// result in the neighbouring region is accepted (and counted) only if
+// (p', T') really belongs to that region and its basic equation reproduces
+// the given inputs within 1e-9. Anything else stays a failure.
+bool other_root(const isentra::State& b, int orig_region, double p_in, double h_in, double s_in) {
+    const int r1 = std::min(orig_region, b.region), r2 = std::max(orig_region, b.region);
+    if (!((r1 == 1 && r2 == 3) || (r1 == 2 && r2 == 3) || (r1 == 2 && r2 == 5))) return false;
+    try {
+        const isentra::State c = isentra::state_pT(b.p, b.T);
+        if (c.region != b.region) return false;
+        auto close = [](double a, double w, double floor) {
+            return std::isnan(w) || std::fabs(a - w) <= kRel * std::max(std::fabs(w), floor);
+        };
+        return close(b.p, p_in, 0.0) && close(c.h, h_in, 1.0) && close(c.s, s_in, 1.0);
+    } catch (const std::exception&) {
+        return false;
+    }
+}
+constexpr double kNone = std::numeric_limits<double>::quiet_NaN();
 
 bool finite_core(const isentra::State& st) {
     return std::isfinite(st.h) && std::isfinite(st.s) && std::isfinite(st.v) &&
@@ -252,6 +285,8 @@ TEST(OracleIF97, InversePH) {
     run_kind("ph", [](Tally& t, const Row& r) {
         const isentra::State st = isentra::state_ph(r.p, r.h);
         if (!finite_core(st)) t.fail(r, "NaN in the state");
+        if (std::fabs(st.T - r.T) > kTolT && other_root(st, r.region, r.p, r.h, kNone))
+            return t.seam(r, st);
         check_wet_x(t, r, st);
         t.add("T [K]", std::fabs(st.T - r.T), kTolT, r, st.T, r.T);
         check_region(t, r, st);
@@ -263,6 +298,8 @@ TEST(OracleIF97, InversePS) {
     run_kind("ps", [](Tally& t, const Row& r) {
         const isentra::State st = isentra::state_ps(r.p, r.s);
         if (!finite_core(st)) t.fail(r, "NaN in the state");
+        if (std::fabs(st.T - r.T) > kTolT && other_root(st, r.region, r.p, kNone, r.s))
+            return t.seam(r, st);
         check_wet_x(t, r, st);
         t.add("T [K]", std::fabs(st.T - r.T), kTolT, r, st.T, r.T);
         check_region(t, r, st);
@@ -274,6 +311,9 @@ TEST(OracleIF97, InverseHS) {
     run_kind("hs", [](Tally& t, const Row& r) {
         const isentra::State st = isentra::state_hs(r.h, r.s);
         if (!finite_core(st)) t.fail(r, "NaN in the state");
+        if ((std::fabs(st.T - r.T) > kTolT || rel(st.p, r.p) > kRel) &&
+            other_root(st, r.region, kNone, r.h, r.s))
+            return t.seam(r, st);
         check_wet_x(t, r, st);
         t.add("p", rel(st.p, r.p), kRel, r, st.p, r.p);
         t.add("T [K]", std::fabs(st.T - r.T), kTolT, r, st.T, r.T);

