@@ -171,20 +171,19 @@ double solve_bracket(G g, double lo, double hi, const char* what) {
 }
 
 // Region by (p,T), p and T already range-checked. 0 = exactly on saturation.
+// (p,T) on the saturation line: p = psat(T) or T = tsat(p) to the last bit
+// (the two equations invert each other only to rounding).
+bool on_saturation(double p, double T) {
+    if (T > Tc || p > pc || p < psat(T_min)) return false;
+    const double ps = psat(T);
+    if (p == ps) return true;
+    return std::fabs(p - ps) <= 1e-12 * ps && tsat(p) == T;
+}
+
 int region_pT(double p, double T) {
-    if (T <= T_13) {
-        const double ps = psat(T);
-        if (p > ps) return 1;
-        if (p < ps) return 2;
-        return 0;
-    }
-    if (T <= T_25) {
-        if (T <= 863.15 && p > b23_p(T)) {
-            if (T < Tc && p == psat(T)) return 0;
-            return 3;
-        }
-        return 2;
-    }
+    if (on_saturation(p, T)) return 0;
+    if (T <= T_13) return p > psat(T) ? 1 : 2;
+    if (T <= T_25) return (T <= 863.15 && p > b23_p(T)) ? 3 : 2;
     return 5;
 }
 

@@ -94,8 +94,7 @@ double tsat_hs(double h, double s);       // SR4-04 Eq. 9, Tsat(h,s) in the wet 
 
 // ---- Backward v(p,T), region 3 (SR5-05(2016)) ---------------------------
 // Subregion letter 'a'..'z' (SR5-05 Table 2 and Section 3) for a region-3 (p,T).
-// For T on the saturation line below the critical point the caller must say
-// which side: liquid_side = true gives the liquid-side subregion.
+// A (p,T) exactly on the saturation line counts as liquid (SR5-05 Table 2).
 char region3_subregion(double p, double T);
 double region3_v_pT(double p, double T);  // backward v, with subregion selection (incl. auxiliary near-critical equations)
 double region3_v_pT_sub(double p, double T, char subregion);  // v by a named subregion's equation
@@ -104,7 +103,7 @@ double region3_v_pT_sub(double p, double T, char subregion);  // v by a named su
 // Density from (p,T) by refining the SR5-05 value until p(rho,T) = p.
 Props region3_pT(double p, double T);
 // Saturated liquid and vapour in region 3, 623.15 K <= T <= Tc: both densities
-// solve p(rho,T) = psat(T) on Eq. 28 (R7-97 Sec. 6/7).
+// solve p(rho,T) = psat(T) on Eq. 28 (R7-97(2012) Sec. 10.2, text to Eq. 36c).
 struct SatPair {
     Props liq;
     Props vap;
