@@ -338,13 +338,16 @@ State state_py(double p, double y, Y which) {
             const Props r13 = region1(p, T_13);
             if (y <= yval(r13, which))
                 return solve_T_in_region(p, y, which, 1, T_min, T_13, backward_T(p, y, which, 1));
-            return solve_T_in_region(p, y, which, 3, T_13, Ts, backward_T(p, y, which, 3));
+            // Up to one ulp below Tsat: at Tsat itself region3_pT may give the vapour
+            // root, and near the critical point the liquid branch needs every bit of T.
+            return solve_T_in_region(p, y, which, 3, T_13, std::nextafter(Ts, 0.0), backward_T(p, y, which, 3));
         }
         // superheated vapour
         if (Ts <= T_13) return vapour_25(p, y, which, Ts);
         const double TB = b23_T(p);
         const Props rb = region2(p, TB);
-        if (y < yval(rb, which)) return solve_T_in_region(p, y, which, 3, Ts, TB, backward_T(p, y, which, 3));
+        if (y < yval(rb, which))
+            return solve_T_in_region(p, y, which, 3, std::nextafter(Ts, TB), TB, backward_T(p, y, which, 3));
         return vapour_25(p, y, which, TB);
     }
     // p >= pc: no dome.
