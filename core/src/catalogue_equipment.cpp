@@ -206,10 +206,10 @@ void add_section_efficiency(std::vector<Function>& out) {
             p_out(),
             T_arg("T_out", "Outlet temperature (superheated steam)"),
             Arg{"u_p_in", Quantity::None,
-                "Uncertainty of the inlet pressure reading as a fraction of the reading (0.0025 for 0.25 %)"},
+                "Uncertainty of the inlet pressure reading as a fraction of the reading (0.0025 for 0.25 %; at most 0.1)"},
             Arg{"u_T_in", Quantity::TemperatureDifference, "Uncertainty of the inlet temperature reading"},
             Arg{"u_p_out", Quantity::None,
-                "Uncertainty of the outlet pressure reading as a fraction of the reading (0.0025 for 0.25 %)"},
+                "Uncertainty of the outlet pressure reading as a fraction of the reading (0.0025 for 0.25 %; at most 0.1)"},
             Arg{"u_T_out", Quantity::TemperatureDifference, "Uncertainty of the outlet temperature reading"}};
     };
     const std::string method =

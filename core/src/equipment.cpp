@@ -247,9 +247,10 @@ EfficiencyUncertainty section_efficiency_uncertainty(double p_in, double T_in, d
                                                      double u_T_out) {
     auto check_rel = [](const char* name, double u) {
         check_finite(name, Quantity::None, u);
-        if (u < 0 || u >= 1)
-            throw RangeError(name, Quantity::None, u, 0.0, 1.0,
-                             "(a pressure uncertainty is a fraction of the reading, e.g. 0.0025 for 0.25 %)");
+        if (u < 0 || u > 0.1)
+            throw RangeError(name, Quantity::None, u, 0.0, 0.1,
+                             "(a pressure uncertainty is a fraction of the reading, e.g. 0.0025 for 0.25 %, "
+                             "at most 0.1)");
     };
     check_rel("u_p_in", u_p_in_rel);
     check_nonneg("u_T_in", Quantity::TemperatureDifference, u_T_in, "(an uncertainty cannot be negative)");

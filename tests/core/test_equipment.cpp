@@ -350,6 +350,10 @@ TEST(EquipmentTurbine, InputErrorsNameTheArgument) {
     EXPECT_EQ(input_of([] { eq::turbine_expansion_pT(120.0, 823.15, 1.0, 0.85); }), "p_in");
     EXPECT_EQ(input_of([] { eq::turbine_expansion_pT(10.0, 2500.0, 1.0, 0.85); }), "T_in");
     EXPECT_EQ(input_of([] { eq::section_efficiency_pT_pT(10.0, 823.15, 10.0, 823.0); }), "p_out");
+    EXPECT_EQ(input_of([] { eq::section_efficiency_uncertainty(10.0, 823.15, 2.0, 580.0, 0.25, 0.5, 0.0025, 0.5); }),
+              "u_p_in");  // 0.25 typed for 0.25 %
+    EXPECT_EQ(input_of([] { eq::section_efficiency_uncertainty(10.0, 823.15, 2.0, 580.0, 0.0025, -0.5, 0.0025, 0.5); }),
+              "u_T_in");
     EXPECT_EQ(input_of([] { eq::pump_pT(0.1, 303.15, 10.0, 0.0); }), "eta");
     EXPECT_EQ(input_of([] { eq::pump_pT(1.0, 303.15, 0.5, 0.8); }), "p_out");
     EXPECT_EQ(input_of([] { eq::valve_pT(1.0, 573.15, 2.0); }), "p_out");

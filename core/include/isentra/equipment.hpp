@@ -56,7 +56,8 @@ double section_efficiency_ph_ph(double p_in, double h_in, double p_out, double h
 // ---- Uncertainty of a section efficiency (ASME PTC 19.1 RSS) --------------
 
 // Inputs: the four readings and the uncertainty of each instrument: pressure
-// uncertainties as a fraction of the reading (0.001 = 0.1 % of reading),
+// uncertainties as a fraction of the reading (0.001 = 0.1 % of reading; at
+// most 0.1, so that a percentage typed by mistake is caught),
 // temperature uncertainties in K. The sensitivity coefficients
 // theta_i = d eta / d x_i are computed analytically from the core's property
 // derivatives ((dh/dT)_p = cp, (ds/dT)_p = cp/T, (dh/dp)_T = v - T (dv/dT)_p,
