@@ -163,8 +163,15 @@ Table call(const Function& f, const std::vector<Table>& args) {
         // Header option of Row functions.
         bool header = false;
         std::vector<std::size_t> numeric;  // indices of the state's numeric arguments
-        for (std::size_t i = 0; i < f.args.size() && i < args.size(); ++i) {
+        for (std::size_t i = 0; i < f.args.size(); ++i) {
             if (f.args[i].quantity == Quantity::Text) continue;
+            if (i >= args.size()) {  // omitted optional argument
+                if (f.args[i].name != "header" && std::isnan(f.args[i].default_value))
+                    return error_table(Value::of_error(ErrorCode::InvalidArgument,
+                                                       "the argument " + f.args[i].name + " is missing"));
+                if (f.args[i].name != "header") numeric.push_back(i);
+                continue;
+            }
             if (f.args[i].name == "header") {
                 const Table& t = args[i];
                 if (!is_scalar(t)) return error_table(Value::of_error(ErrorCode::InvalidArgument, "header must be a single value"));
@@ -178,6 +185,7 @@ Table call(const Function& f, const std::vector<Table>& args) {
         // Broadcast shape.
         std::size_t rows = 1, cols = 1;
         for (std::size_t i : numeric) {
+            if (i >= args.size()) continue;
             const Table& t = args[i];
             if (is_scalar(t)) continue;
             if (rows == 1 && cols == 1) {
@@ -221,9 +229,13 @@ Table call(const Function& f, const std::vector<Table>& args) {
             bool failed = false;
             for (std::size_t j = 0; j < numeric.size(); ++j) {
                 const std::size_t i = numeric[j];
+                const catalogue::Arg& spec_arg = f.args[i];
+                if (i >= args.size()) {  // omitted optional: its default, in core units
+                    a[j] = spec_arg.default_value;
+                    continue;
+                }
                 const Table& t = args[i];
                 const Value& v = is_scalar(t) ? t.cells[0] : t.cells[k];
-                const catalogue::Arg& spec_arg = f.args[i];
                 if (v.kind == Value::Kind::Number) {
                     if (!std::isfinite(v.number)) {
                         result = Value::of_error(ErrorCode::InvalidArgument, spec_arg.name + " is not a finite number");
@@ -232,6 +244,10 @@ Table call(const Function& f, const std::vector<Table>& args) {
                     }
                     a[j] = spec.to_core(spec_arg.quantity, v.number);
                 } else if (v.kind == Value::Kind::Empty) {
+                    if (is_scalar(t) && !std::isnan(spec_arg.default_value)) {  // left blank: default
+                        a[j] = spec_arg.default_value;
+                        continue;
+                    }
                     if (ranged && !is_scalar(t)) {
                         empty = true;
                         break;

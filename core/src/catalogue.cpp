@@ -420,7 +420,11 @@ std::string unit_pair(Quantity q) {
 
 }  // namespace
 
-bool Function::has_units_arg() const { return !args.empty() && args.back().name == "units"; }
+bool Function::has_units_arg() const {
+    for (const Arg& a : args)
+        if (a.name == "units" && a.quantity == Quantity::Text) return true;
+    return false;
+}
 
 const std::vector<Function>& functions() {
     static const std::vector<Function> all = build();  // built once, immutable afterwards
@@ -452,7 +456,9 @@ std::string describe_function(const Function& f) {
 
 std::string describe_arg(const Function& f, std::size_t i) {
     const Arg& a = f.args.at(i);
-    return a.description + "." + unit_pair(a.quantity);
+    std::string d = a.description;
+    if (d.empty() || d.back() != '.') d += ".";
+    return d + unit_pair(a.quantity);
 }
 
 const char* version() { return ISENTRA_VERSION; }

@@ -264,8 +264,10 @@ void add_section_efficiency(std::vector<Function>& out) {
             Arg{eta_name, Quantity::None, eta_desc},
             Arg{"x_in", Quantity::None, "Vapour quality at the stage or section inlet (above 1 = superheated)"},
             Arg{"x_out", Quantity::None, "Vapour quality at the stage or section outlet"},
-            Arg{"a", Quantity::None, "Baumann coefficient: efficiency fraction lost per unit of mean moisture; 1 "
-                                     "is the usual value"}};
+            Arg{"a", Quantity::None,
+                "Optional Baumann coefficient: efficiency fraction lost per unit of mean moisture; default 1, "
+                "the usual value",
+                true, false, 1.0}};
     };
     out.push_back(number("STEAM.BAUMANN.WET", "baumannWet", cat_turbine,
                          "Efficiency of a stage or section working in wet steam from its dry-steam efficiency." +

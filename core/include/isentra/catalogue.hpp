@@ -10,6 +10,7 @@
 
 #include <cstddef>
 #include <functional>
+#include <limits>
 #include <string>
 #include <string_view>
 #include <vector>
@@ -24,6 +25,9 @@ struct Arg {
     std::string description;  // e.g. "Pressure"; units are appended by describe_arg()
     bool optional = false;    // only trailing arguments may be optional
     bool varargs = false;     // the last argument takes all remaining values (UNO sequence<any>)
+    // Value of an omitted optional numeric argument, in core units (NaN: none,
+    // the argument must be given).
+    double default_value = std::numeric_limits<double>::quiet_NaN();
 };
 
 enum class ResultKind {
@@ -51,7 +55,7 @@ struct Function {
     // Row results: the column names and their quantities.
     std::vector<std::string> row_names;
     std::vector<Quantity> row_quantities;
-    bool has_units_arg() const;  // last argument is the optional "units" text
+    bool has_units_arg() const;  // one argument is the optional "units" text
 };
 
 const std::vector<Function>& functions();
