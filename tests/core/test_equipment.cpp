@@ -673,7 +673,7 @@ TEST(EquipmentCatalogue, NamesMethodsAndArguments) {
 // until call() reads a "units" argument that is not the last one (today the
 // units text of every Row function with a header argument is ignored, and SI
 // is used); enable it then.
-TEST(EquipmentCall, DISABLED_RowFunctionsInUSUnits) {
+TEST(EquipmentCall, RowFunctionsInUSUnits) {
     const eq::Expansion e = eq::turbine_expansion_pT(10.0, 823.15, 0.01, 0.85);
     const double p1 = units::convert(10.0, "MPa", "psia"), p2 = units::convert(0.01, "MPa", "psia");
     const Table t = call(fn("STEAM.TURBINE.EXPANSION.PT"),
