@@ -260,8 +260,9 @@ std::string functions_md(const std::vector<cat::Function>& fs) {
     o << "<!-- " << banner << "\n     Refresh with: cmake --build <build dir> --target update-docs -->\n\n"
       << "# Isentra function reference\n\n"
       << "Isentra " << cat::version() << " adds " << fs.size()
-      << " functions to LibreOffice Calc. Arguments are separated by `;` (Calc also accepts the separator "
-         "set under Tools > Options > LibreOffice Calc > Formula). Every argument can be a number, a text or "
+      << " functions to LibreOffice Calc. This reference separates arguments with `;`; Calc may show "
+         "another separator, depending on the settings under Tools > Options > LibreOffice Calc > "
+         "Formula. Every argument can be a number, a text or "
          "a cell reference; numeric arguments can also be ranges, which give an array result (enter it as an "
          "array formula, Ctrl+Shift+Enter). Arguments in [brackets] are optional.\n\n"
       << "Units: the optional last argument `units` chooses the unit system for all inputs and the result, "
