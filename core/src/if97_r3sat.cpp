@@ -177,15 +177,31 @@ double monotone_root(double p, double T, double rho0) {
 
 }  // namespace
 
-Props region3_pT(double p, double T) {
-    // Side of the saturation line, decided by Eq. 30 (consistent with
-    // region3_saturation); only meaningful for T < Tc and p <= pc.
-    int side = 0;
-    if (T < Tc && p <= pc) side = (p >= psat(T)) ? +1 : -1;
-    else if (p <= pc) side = -1;  // T >= Tc: the subregions on the vapour-like side
+namespace r3_detail {
+
+// Density from (p,T) on a chosen branch of Eq. 28: side +1 the liquid-like
+// root, -1 the vapour-like root, 0 the side of the saturation line of (p,T).
+// Only T < Tc with p <= pc has two branches; elsewhere side is ignored.
+Props pT_side(double p, double T, int side) {
+    const bool two_phase_possible = T < Tc && p <= pc;
+    if (!two_phase_possible) side = (p <= pc) ? -1 : 0;  // T >= Tc: subregions on the vapour-like side
+    else if (side == 0) {
+        // Side of the saturation line by Eq. 30 (consistent with
+        // region3_saturation). Within rounding of the line Eqs. 30 and 31 may
+        // disagree (near Tc psat(tsat(p)) exceeds p by up to ~2.4e-13
+        // relative, i.e. ~2e-11 K in T): there T against tsat(p) decides, so
+        // that every T below tsat(p) is liquid and every T above is vapour,
+        // as the state solver brackets them.
+        const double ps = psat(T);
+        side = (p >= ps) ? +1 : -1;
+        if (std::fabs(p - ps) <= 1e-11 * p) {
+            const double ts = tsat(p);
+            if (T < ts) side = +1;
+            else if (T > ts) side = -1;
+        }
+    }
     const char sub = vpt_detail::subregion(p, T, side);
     const double rho0 = 1.0 / vpt_detail::v_sub(p, T, sub);
-    const bool two_phase_possible = T < Tc && p <= pc;
     Props P;
     if (newton(p, T, rho0, two_phase_possible ? side : 0, P)) return P;
 
@@ -201,6 +217,10 @@ Props region3_pT(double p, double T) {
         rho = vapour_root(p, T, s.a, s.rsv, region3_p(s.rsv, T));
     return region3(rho, T);
 }
+
+}  // namespace r3_detail
+
+Props region3_pT(double p, double T) { return r3_detail::pT_side(p, T, 0); }
 
 SatPair region3_saturation(double T) {
     if (!(T < Tc)) {

@@ -18,6 +18,12 @@
 
 namespace isentra {
 
+namespace if97::r3_detail {
+// if97_r3sat.cpp: region-3 density from (p,T) on a chosen branch of Eq. 28
+// (+1 liquid-like, -1 vapour-like, 0 by the side of the saturation line).
+Props pT_side(double p, double T, int side);
+}  // namespace if97::r3_detail
+
 using namespace if97;
 
 namespace {
@@ -58,7 +64,10 @@ void check_x(double x) {
 
 // p_in: the pressure as given by the caller (a region-3 state's p(rho,T)
 // matches it only to the solver's tolerance).
-State from_props(const Props& pr, double p_in) {
+// side: for a region-3 state below pc solved on a chosen branch of Eq. 28,
+// +1 liquid / -1 vapour (near the critical point the branch, not rho > rhoc,
+// tells them apart); 0 decides by density.
+State from_props(const Props& pr, double p_in, int side = 0) {
     State st;
     st.T = pr.T;
     st.p = p_in;
@@ -82,6 +91,8 @@ State from_props(const Props& pr, double p_in) {
         st.phase = Phase::Liquid;
     else if (pr.region == 2 || pr.region == 5)
         st.phase = Phase::Vapour;
+    else if (side != 0)
+        st.phase = side > 0 ? Phase::Liquid : Phase::Vapour;
     else  // region 3 below the critical point: liquid side if denser than critical
         st.phase = pr.rho > rhoc ? Phase::Liquid : Phase::Vapour;
     return st;
@@ -196,24 +207,75 @@ double ydT(const Props& pr, Y y) { return y == Y::H ? pr.cp : pr.cp / pr.T; }
 const char* yname(Y y) { return y == Y::H ? "h" : "s"; }
 Quantity yq(Y y) { return y == Y::H ? Quantity::SpecificEnergy : Quantity::SpecificEntropy; }
 
-Props props_region(double p, double T, int region) {
+// side: the branch of Eq. 28 in region 3 (see r3_detail::pT_side).
+Props props_region(double p, double T, int region, int side = 0) {
     switch (region) {
     case 1: return region1(p, T);
     case 2: return region2(p, T);
-    case 3: return region3_pT(p, T);
+    case 3: return r3_detail::pT_side(p, T, side);
     default: return region5(p, T);
     }
 }
 
 // Solves y(p,T) = y for T within [lo, hi] in one region.
-State solve_T_in_region(double p, double y, Y which, int region, double lo, double hi, double guess) {
+State solve_T_in_region(double p, double y, Y which, int region, double lo, double hi, double guess,
+                        int side = 0) {
     auto f = [&](double T) {
-        const Props pr = props_region(p, T, region);
+        const Props pr = props_region(p, T, region, side);
         return std::make_pair(yval(pr, which) - y, ydT(pr, which));
     };
     if (!(guess >= lo && guess <= hi)) guess = 0.5 * (lo + hi);
     const double T = solve_newton(f, guess, lo, hi, which == Y::H ? "T(p,h)" : "T(p,s)");
-    return from_props(props_region(p, T, region), p);
+    return from_props(props_region(p, T, region, side), p, side);
+}
+
+// Whether a solver result reproduces y within 1e-9 (relative, at least 1 unit:
+// h and s cross zero at the IF97 reference state).
+bool reproduces(double got, double want) {
+    return std::fabs(got - want) <= 1e-9 * std::max(1.0, std::fabs(want));
+}
+
+// Region 3 along the isobar p in density: for fixed p, T(rho) from
+// p(rho,T) = p is unique because (dp/dT)_rho > 0, and h and s change
+// monotonically with rho along the isobar. Near the critical point this keeps
+// full resolution where T runs out of bits (cp diverges: one ulp of T moves h
+// by more than 1e-9 relative) and where, within rounding of the saturation
+// line, Eq. 30 and Eq. 28 disagree about which branch exists at (p, Tsat)
+// (see if97_r3sat.cpp). r1, r2: densities bracketing the solution.
+State solve_rho_region3(double p, double y, Y which, double r1, double r2, double T0, int side) {
+    double T = T0;  // warm start of the inner solve
+    auto T_of_rho = [&](double rho) {
+        for (int it = 0; it < 40; ++it) {
+            const double pr = region3_p(rho, T);
+            const double r = pr - p;
+            if (r == 0.0) break;
+            const double dT = 1e-7 * T;
+            const double slope = (region3_p(rho, T + dT) - pr) / dT;  // (dp/dT)_rho > 0
+            if (!(slope > 0.0)) break;
+            const double step = r / slope;
+            T -= step;
+            if (std::fabs(step) <= 1e-15 * T) break;
+        }
+        return T;
+    };
+    auto F = [&](double rho) { return yval(region3(rho, T_of_rho(rho)), which) - y; };
+    const double lo = std::min(r1, r2), hi = std::max(r1, r2);
+    const double rho = solve_bracket(F, lo, hi, which == Y::H ? "rho(p,h)" : "rho(p,s)");
+    const Props pr = region3(rho, T_of_rho(rho));
+    return from_props(pr, p, side);
+}
+
+// Region 3 at pressure p on one branch (side, see r3_detail::pT_side) between
+// lo and hi in T; rho_lo, rho_hi: densities bracketing the state along the
+// isobar, for the density fallback.
+State solve_region3(double p, double y, Y which, double lo, double hi, double guess, int side,
+                    double rho_a, double rho_b) {
+    try {
+        State st = solve_T_in_region(p, y, which, 3, lo, hi, guess, side);
+        if (reproduces(which == Y::H ? st.h : st.s, y)) return st;
+    } catch (const Error&) {
+    }
+    return solve_rho_region3(p, y, which, rho_a, rho_b, std::clamp(guess, lo, hi), side);
 }
 
 double backward_T(double p, double y, Y which, int region) {
@@ -338,16 +400,17 @@ State state_py(double p, double y, Y which) {
             const Props r13 = region1(p, T_13);
             if (y <= yval(r13, which))
                 return solve_T_in_region(p, y, which, 1, T_min, T_13, backward_T(p, y, which, 1));
-            // Up to one ulp below Tsat: at Tsat itself region3_pT may give the vapour
-            // root, and near the critical point the liquid branch needs every bit of T.
-            return solve_T_in_region(p, y, which, 3, T_13, std::nextafter(Ts, 0.0), backward_T(p, y, which, 3));
+            // On the liquid branch of Eq. 28 up to Tsat itself.
+            return solve_region3(p, y, which, T_13, Ts, backward_T(p, y, which, 3), +1, sp.liq.rho,
+                                 r3_detail::pT_side(p, T_13, +1).rho);
         }
         // superheated vapour
         if (Ts <= T_13) return vapour_25(p, y, which, Ts);
         const double TB = b23_T(p);
         const Props rb = region2(p, TB);
         if (y < yval(rb, which))
-            return solve_T_in_region(p, y, which, 3, std::nextafter(Ts, TB), TB, backward_T(p, y, which, 3));
+            return solve_region3(p, y, which, Ts, TB, backward_T(p, y, which, 3), -1, sp.vap.rho,
+                                 r3_detail::pT_side(p, TB, -1).rho);
         return vapour_25(p, y, which, TB);
     }
     // p >= pc: no dome.
@@ -355,7 +418,9 @@ State state_py(double p, double y, Y which) {
     if (y <= yval(r13, which)) return solve_T_in_region(p, y, which, 1, T_min, T_13, backward_T(p, y, which, 1));
     const double TB = b23_T(p);
     const Props rb = region2(p, TB);
-    if (y < yval(rb, which)) return solve_T_in_region(p, y, which, 3, T_13, TB, backward_T(p, y, which, 3));
+    if (y < yval(rb, which))
+        return solve_region3(p, y, which, T_13, TB, backward_T(p, y, which, 3), 0,
+                             r3_detail::pT_side(p, T_13, 0).rho, r3_detail::pT_side(p, TB, 0).rho);
     return vapour_25(p, y, which, TB);
 }
 
