@@ -270,12 +270,23 @@ State solve_rho_region3(double p, double y, Y which, double r1, double r2, doubl
 // isobar, for the density fallback.
 State solve_region3(double p, double y, Y which, double lo, double hi, double guess, int side,
                     double rho_a, double rho_b) {
+    State st;
+    bool have = false;
     try {
-        State st = solve_T_in_region(p, y, which, 3, lo, hi, guess, side);
+        st = solve_T_in_region(p, y, which, 3, lo, hi, guess, side);
         if (reproduces(which == Y::H ? st.h : st.s, y)) return st;
+        have = true;
     } catch (const Error&) {
     }
-    return solve_rho_region3(p, y, which, rho_a, rho_b, std::clamp(guess, lo, hi), side);
+    try {
+        return solve_rho_region3(p, y, which, rho_a, rho_b, std::clamp(guess, lo, hi), side);
+    } catch (const Error&) {
+        // No root in region 3 along this isobar: y lies in the band where the
+        // regions meet only within R7-97(2012)'s permitted inconsistencies
+        // (Sec. 10, Tables 43/44); the T solve's end point on the seam stands.
+        if (have) return st;
+        throw;
+    }
 }
 
 double backward_T(double p, double y, Y which, int region) {
@@ -494,6 +505,44 @@ void isentrope_bounds(double s, double& plo, double& phi, State& lo, State& hi) 
     phi = nudge(phi, plo, s, hi);
 }
 
+// (h,s) in one region on its own equation, near a seam: nested Newton, the
+// inner one for T_r(p) from s on region r's equation ((ds/dT)_p = cp/T), the
+// outer one for p from h_r(p) = h ((dh/dp)_s = v). Starts at (p0, T0).
+// Returns true with the state if it converges to an exact solution (h and s
+// within 1e-9) that lies inside region r's own domain.
+bool hs_in_region(double h, double s, int r, double p0, double T0, State& out) {
+    double p = p0, T = T0;
+    Props pr;
+    auto T_of_p = [&](double pp) {
+        for (int it = 0; it < 30; ++it) {
+            pr = props_region(pp, T, r);
+            const double step = (pr.s - s) * pr.T / pr.cp;
+            if (!std::isfinite(step)) return false;
+            T -= step;
+            if (std::fabs(step) <= 1e-14 * T) break;
+        }
+        pr = props_region(pp, T, r);
+        return std::isfinite(pr.h);
+    };
+    for (int it = 0; it < 30; ++it) {
+        if (!(p > 0.0) || !(p <= p_max * (1 + 1e-12)) || !T_of_p(p)) return false;
+        const double step = (pr.h - h) / (pr.v * 1e3);
+        if (!std::isfinite(step)) return false;
+        p -= step;
+        if (std::fabs(step) <= 1e-15 * p) break;
+    }
+    if (p > p_max && p <= p_max * (1 + 1e-12)) p = p_max;  // rounding at the 100 MPa limit
+    if (!(p > 0.0) || !(p <= p_max) || !T_of_p(p)) return false;
+    if (!reproduces(pr.h, h) || !reproduces(pr.s, s)) return false;
+    if (T < T_min || T > top_T(p)) return false;
+    if (region_pT(p, T) != r) return false;  // outside this region's domain (or on saturation)
+    out = from_props(pr, p);
+    return true;
+}
+
+// Regions to try for an (h,s) state near a seam, by the region Newton ended in.
+constexpr int kNeighbours[6][3] = {{0, 0, 0}, {1, 3, 0}, {2, 3, 5}, {3, 1, 2}, {0, 0, 0}, {5, 2, 0}};
+
 }  // namespace
 
 State state_hs(double h, double s) {
@@ -506,6 +555,17 @@ State state_hs(double h, double s) {
     const double tol = 1e-12 * std::max(1.0, std::fabs(h));
     if (std::fabs(h - lo.h) <= tol) return lo;
     if (std::fabs(h - hi.h) <= tol) return hi;
+    // Beyond an end that lies on a region seam (e.g. 100 MPa at 623.15 K, where
+    // state_ps gives region 1 but region 3 has the same entropy at a slightly
+    // higher h): the neighbouring region's exact solution at that end.
+    if (h < lo.h || h > hi.h) {
+        const State& e = h < lo.h ? lo : hi;
+        if (e.region != 4)
+            for (int r : kNeighbours[e.region]) {
+                State out;
+                if (r != 0 && r != e.region && hs_in_region(h, s, r, e.p, e.T, out)) return out;
+            }
+    }
     if (h < lo.h || h > hi.h)
         throw RangeError("h", Quantity::SpecificEnergy, h, lo.h, hi.h,
                          "for this entropy (the limits of IAPWS-IF97 along this isentrope)");
@@ -523,7 +583,24 @@ State state_hs(double h, double s) {
     // p near the critical point): the critical pressure, so that the phase
     // (decided by p >= pc) does not hang on the last bits.
     if (std::fabs(p - pc) <= 1e-9 * pc) p = pc;
-    return state_ps(p, s);
+    const State st = state_ps(p, s);
+    if (reproduces(st.h, h) && reproduces(st.s, s)) return st;
+    // Near a region seam (623.15 K between 1 and 3, B23 between 2 and 3,
+    // 1073.15 K between 2 and 5) h(p) along the isentrope jumps, because the
+    // two equations meet only within R7-97(2012)'s permitted inconsistencies
+    // (Sec. 10, Tables 43/44), and Newton can end on the seam with no exact
+    // root in the region it tried. Solve in each adjacent region on its own
+    // equation and return the exact solution.
+    if (st.region != 4) {
+        for (int r : kNeighbours[st.region]) {
+            if (r == 0) continue;
+            State out;
+            if (hs_in_region(h, s, r, st.p, st.T, out)) return out;
+        }
+    }
+    // A true gap between the regions' images in (h,s): the seam point, which
+    // reproduces (h,s) within the permitted inconsistency of the regions.
+    return st;
 }
 
 double quality(const State& st) {

@@ -341,11 +341,22 @@ TEST(RoundTripWet, PxTxFedBack) {
                    std::fabs(b.T - a.T) <= kTolT;
         };
         const std::string band = a.p > kPs623 ? " p>16.529" : " p<=16.529";
+        // Within 0.01 K of Tc the quality is ill-conditioned in the saturation
+        // temperature: tsat(psat(T)) returns T only to ~2.6e-11 K (R7-97(2012)
+        // Eqs. 30/31 invert each other to rounding), and dh'/dT, dh''/dT grow
+        // without bound towards Tc, so at T = 647.09 K x comes back ~1.2e-9 off
+        // while the state itself is exact. There h, s and T (and p) are
+        // checked instead of x.
+        const bool near_crit = if97::Tc - a.T < 0.01;
+        auto x_back = [&](const State& b) {
+            return near_crit ? rel1(b.h, a.h) <= kRel && rel1(b.s, a.s) <= kRel
+                             : std::fabs(b.x - x) <= kRel;
+        };
         State b;
         f.category(std::string(from) + "->ph" + band);
         if (guarded(f, "state_ph", a.p, a.h, [&] { b = isentra::state_ph(a.p, a.h); })) {
             f.check(finite_core(b), "state_ph(%.17g, %.17g) has NaN", a.p, a.h);
-            f.check((b.phase == Phase::TwoPhase && std::fabs(b.x - x) <= kRel &&
+            f.check((b.phase == Phase::TwoPhase && x_back(b) &&
                      std::fabs(b.T - a.T) <= kTolT) || on_line_ok(b),
                     "state_ph(%.17g, %.17g) -> %s x=%.17g T=%.17g, want TwoPhase x=%.17g T=%.17g "
                     "[from %s]",
@@ -354,7 +365,7 @@ TEST(RoundTripWet, PxTxFedBack) {
         f.category(std::string(from) + "->ps" + band);
         if (guarded(f, "state_ps", a.p, a.s, [&] { b = isentra::state_ps(a.p, a.s); })) {
             f.check(finite_core(b), "state_ps(%.17g, %.17g) has NaN", a.p, a.s);
-            f.check((b.phase == Phase::TwoPhase && std::fabs(b.x - x) <= kRel &&
+            f.check((b.phase == Phase::TwoPhase && x_back(b) &&
                      std::fabs(b.T - a.T) <= kTolT) || on_line_ok(b),
                     "state_ps(%.17g, %.17g) -> %s x=%.17g T=%.17g, want TwoPhase x=%.17g T=%.17g "
                     "[from %s]",
@@ -364,7 +375,7 @@ TEST(RoundTripWet, PxTxFedBack) {
         if (interior &&
             guarded(f, "state_hs", a.h, a.s, [&] { b = isentra::state_hs(a.h, a.s); })) {
             f.check(finite_core(b), "state_hs(%.17g, %.17g) has NaN", a.h, a.s);
-            f.check(b.phase == Phase::TwoPhase && std::fabs(b.x - x) <= kRel &&
+            f.check(b.phase == Phase::TwoPhase && x_back(b) &&
                         rel(b.p, a.p) <= kRel && std::fabs(b.T - a.T) <= kTolT,
                     "state_hs(%.17g, %.17g) -> %s x=%.17g p=%.17g T=%.17g, want TwoPhase "
                     "x=%.17g p=%.17g T=%.17g [from %s]",
@@ -447,9 +458,13 @@ TEST(RoundTripSaturationEdge, PhaseJustOffTheLine) {
                     c.name, c.value, ph(b.phase), ph(c.want));
             f.check(rel1(b.h, c.value) <= kRel, "state_ph(p=%.17g, %s=%.17g).h = %.17g", p, c.name,
                     c.value, b.h);
+            // x = (h - h')/(h'' - h') by definition: 1e-9 of h' or h'' is not a
+            // small x when the dome is narrow (h'' - h' = 1.74 kJ/kg at
+            // 22.06399 MPa gives x = 1.2e-6 at h'(1+1e-9)).
             if (c.want == Phase::TwoPhase)
-                f.check(b.x >= 0 && b.x <= 1 && (c.value < hl + 0.5 * (hv - hl) ? b.x < 1e-6 : b.x > 1 - 1e-6),
-                        "state_ph(p=%.17g, %s).x = %.17g", p, c.name, b.x);
+                f.check(b.x >= 0 && b.x <= 1 && std::fabs(b.x - (c.value - hl) / (hv - hl)) <= kRel,
+                        "state_ph(p=%.17g, %s).x = %.17g, want %.17g", p, c.name, b.x,
+                        (c.value - hl) / (hv - hl));
             else
                 // near 623.15 K the vapour side meets the 2/3 seam, whose second
                 // root can lie a few mK off (see other_root): hence 0.05 K here
@@ -497,9 +512,16 @@ TEST(RoundTripSaturationEdge, EquilibriumQualityOutsideTheDome) {
             State b;
             f.category(p > kPs623 ? "p>16.529" : "p<=16.529");
             if (!guarded(f, "state_ph", p, h, [&] { b = isentra::state_ph(p, h); })) continue;
-            f.check(std::isfinite(b.x) && (h < hl ? b.x < 0 : b.x > 1) && std::fabs(b.x - want) <= kRel * std::max(1.0, std::fabs(want)),
-                    "state_ph(%.17g, %.17g) [%s] x = %.17g, want (h-h')/(h''-h') = %.17g", p, h,
-                    ph(b.phase), b.x, want);
+            // State::x is NaN for a single-phase state (state.hpp); the
+            // equilibrium quality is isentra::quality().
+            f.check(std::isnan(b.x), "state_ph(%.17g, %.17g) [%s] x = %.17g, want NaN", p, h,
+                    ph(b.phase), b.x);
+            double q = std::numeric_limits<double>::quiet_NaN();
+            if (!guarded(f, "quality", p, h, [&] { q = isentra::quality(b); })) continue;
+            f.check(std::isfinite(q) && (h < hl ? q < 0 : q > 1) &&
+                        std::fabs(q - want) <= kRel * std::max(1.0, std::fabs(want)),
+                    "quality(state_ph(%.17g, %.17g)) [%s] = %.17g, want (h-h')/(h''-h') = %.17g", p,
+                    h, ph(b.phase), q, want);
         }
     }
     f.finish();
@@ -518,9 +540,11 @@ TEST(RoundTripCritical, AroundTheCriticalPoint) {
             f.category(p >= if97::pc ? "pT p>=pc" : "pT p<pc");
             if (!guarded(f, "state_pT", p, T, [&] { a = isentra::state_pT(p, T); })) continue;
             f.check(finite_core(a), "state_pT(%.17g, %.17g) has NaN", p, T);
+            // Phase names (state.hpp): p >= pc and T >= Tc is supercritical; p >= pc
+            // with T < Tc is compressed liquid.
             if (p >= if97::pc)
-                f.check(a.phase == Phase::Supercritical, "state_pT(%.17g, %.17g).phase = %s", p, T,
-                        ph(a.phase));
+                f.check(a.phase == (T >= if97::Tc ? Phase::Supercritical : Phase::Liquid),
+                        "state_pT(%.17g, %.17g).phase = %s", p, T, ph(a.phase));
             State b;
             f.category("ph/ps/hs");
             if (guarded(f, "state_ph", p, a.h, [&] { b = isentra::state_ph(p, a.h); }))
