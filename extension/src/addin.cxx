@@ -212,49 +212,71 @@ Any SteamFunctions::dispatch(std::size_t index, const Any* const* args, std::siz
 }
 
 // ---- XAddIn -------------------------------------------------------------------
+// Calc asks for these texts while it builds its function list; they never
+// throw (an unknown name or a failure gives an empty text).
+
+namespace {
+
+template <class F>
+OUString text_or_empty(F f) noexcept {
+    try {
+        return f();
+    } catch (...) {
+        return OUString();
+    }
+}
+
+bool valid_arg(const cat::Function* f, sal_Int32 n) {
+    return f && n >= 0 && static_cast<std::size_t>(n) < f->args.size();
+}
+
+}  // namespace
 
 OUString SteamFunctions::getProgrammaticFuntionName(const OUString& aDisplayName) {
-    const OUString wanted = aDisplayName.toAsciiUpperCase();
-    for (const cat::Function& f : cat::functions())
-        if (to_ou(f.name).toAsciiUpperCase() == wanted) return to_ou(f.method);
-    return OUString();
+    return text_or_empty([&] {
+        const OUString wanted = aDisplayName.toAsciiUpperCase();
+        for (const cat::Function& f : cat::functions())
+            if (to_ou(f.name).toAsciiUpperCase() == wanted) return to_ou(f.method);
+        return OUString();
+    });
 }
 
 OUString SteamFunctions::getDisplayFunctionName(const OUString& aProgrammaticName) {
-    const cat::Function* f = by_method(aProgrammaticName);
-    return f ? to_ou(f->name) : OUString();
+    return text_or_empty([&] {
+        const cat::Function* f = by_method(aProgrammaticName);
+        return f ? to_ou(f->name) : OUString();
+    });
 }
 
 OUString SteamFunctions::getFunctionDescription(const OUString& aProgrammaticName) {
-    try {
+    return text_or_empty([&] {
         const cat::Function* f = by_method(aProgrammaticName);
         return f ? to_ou(cat::describe_function(*f)) : OUString();
-    } catch (const std::exception&) {
-        return OUString();
-    }
+    });
 }
 
 OUString SteamFunctions::getDisplayArgumentName(const OUString& aProgrammaticName, sal_Int32 nArgument) {
-    const cat::Function* f = by_method(aProgrammaticName);
-    if (!f || nArgument < 0 || static_cast<std::size_t>(nArgument) >= f->args.size()) return OUString();
-    return to_ou(f->args[static_cast<std::size_t>(nArgument)].name);
+    return text_or_empty([&] {
+        const cat::Function* f = by_method(aProgrammaticName);
+        return valid_arg(f, nArgument) ? to_ou(f->args[static_cast<std::size_t>(nArgument)].name) : OUString();
+    });
 }
 
 OUString SteamFunctions::getArgumentDescription(const OUString& aProgrammaticName, sal_Int32 nArgument) {
-    try {
+    return text_or_empty([&] {
         const cat::Function* f = by_method(aProgrammaticName);
-        if (!f || nArgument < 0 || static_cast<std::size_t>(nArgument) >= f->args.size()) return OUString();
-        return to_ou(cat::describe_arg(*f, static_cast<std::size_t>(nArgument)));
-    } catch (const std::exception&) {
-        return OUString();
-    }
+        return valid_arg(f, nArgument) ? to_ou(cat::describe_arg(*f, static_cast<std::size_t>(nArgument)))
+                                       : OUString();
+    });
 }
 
 OUString SteamFunctions::getProgrammaticCategoryName(const OUString&) { return "Add-In"; }
 
 OUString SteamFunctions::getDisplayCategoryName(const OUString& aProgrammaticName) {
-    const cat::Function* f = by_method(aProgrammaticName);
-    return f ? to_ou(f->category) : OUString("Add-In");
+    return text_or_empty([&] {
+        const cat::Function* f = by_method(aProgrammaticName);
+        return f ? to_ou(f->category) : OUString("Add-In");
+    });
 }
 
 // ---- XLocalizable, XServiceName, XServiceInfo ------------------------------------
