@@ -12,6 +12,7 @@
 #include <limits>
 #include <string>
 
+#include <boost/math/tools/minima.hpp>
 #include <boost/math/tools/roots.hpp>
 
 #include "isentra/error.hpp"
@@ -465,7 +466,20 @@ double nudge(double p, double inside, double s, State& out) {
 
 // The pressure interval in which the isentrope s lies inside IAPWS-IF97's
 // range, with the states at both ends.
-void isentrope_bounds(double s, double& plo, double& phi, State& lo, State& hi) {
+// At 273.15 K liquid water expands on cooling (density maximum above 0 degC
+// up to some 20 MPa), so s1(p, 273.15 K) first rises with p, then falls: the
+// highest entropy of the 273.15 K isotherm in region 1 and its pressure.
+struct ColdTop {
+    double p, s;
+};
+ColdTop cold_top() {
+    auto neg_s = [](double p) { return -region1(p, T_min).s; };
+    std::uintmax_t it = 200;
+    const auto r = boost::math::tools::brent_find_minima(neg_s, psat(T_min), p_max, 40, it);
+    return ColdTop{r.first, -r.second};
+}
+
+void isentrope_bounds(double s, double h, double& plo, double& phi, State& lo, State& hi) {
     const double p_dome_min = psat(T_min);
     // Lower end: 273.15 K, i.e. the vapour side below 611.213 Pa, the wet
     // isotherm at 611.213 Pa, or cold compressed liquid.
@@ -479,6 +493,25 @@ void isentrope_bounds(double s, double& plo, double& phi, State& lo, State& hi) 
                             "the lowest pressure of this entropy");
     } else if (s >= region1(p_dome_min, T_min).s) {
         plo = p_dome_min;
+        static const ColdTop top = cold_top();  // constant, computed once (thread-safe)
+        if (s < top.s) {
+            // The isentrope leaves IF97's range (T < 273.15 K) between pa and
+            // pb: two pieces; h (increasing with p along it) tells which.
+            const double pa = solve_bracket([&](double p) { return region1(p, T_min).s - s; }, p_dome_min,
+                                            top.p, "the 273.15 K end of this entropy");
+            const double ha = region1(pa, T_min).h;
+            if (h <= ha * (1 + 1e-12 * (ha > 0 ? 1 : -1)) + 1e-12) {
+                phi = pa;
+                plo = nudge(plo, phi, s, lo);
+                phi = nudge(phi, plo, s, hi);
+                return;
+            }
+            if (region1(p_max, T_min).s > s)
+                throw RangeError("h", Quantity::SpecificEnergy, h, none, ha,
+                                 "for this entropy (hotter states of this entropy would be colder than 273.15 K)");
+            plo = solve_bracket([&](double p) { return region1(p, T_min).s - s; }, top.p, p_max,
+                                "the 273.15 K end of this entropy");
+        }
     } else {
         // Colder than 0 degC liquid would be needed at low pressure.
         double ta = region1(p_dome_min, T_min).s - s, tb = region1(p_max, T_min).s - s;
@@ -524,14 +557,18 @@ bool hs_in_region(double h, double s, int r, double p0, double T0, State& out) {
         pr = props_region(pp, T, r);
         return std::isfinite(pr.h);
     };
+    // A region-3 h carries the ~1e-13 noise of its density solve: stop when
+    // the residual is down to that.
     for (int it = 0; it < 30; ++it) {
-        if (!(p > 0.0) || !(p <= p_max * (1 + 1e-12)) || !T_of_p(p)) return false;
+        if (!(p > 0.0) || !(p <= p_max * (1 + 1e-9)) || !T_of_p(p)) return false;
+        if (std::fabs(pr.h - h) <= 1e-14 * std::max(1.0, std::fabs(h))) break;
         const double step = (pr.h - h) / (pr.v * 1e3);
         if (!std::isfinite(step)) return false;
         p -= step;
         if (std::fabs(step) <= 1e-15 * p) break;
     }
-    if (p > p_max && p <= p_max * (1 + 1e-12)) p = p_max;  // rounding at the 100 MPa limit
+    // Rounding at the 100 MPa limit (a few 1e-12 relative: 1e-13 of h).
+    if (p > p_max && p <= p_max * (1 + 1e-11)) p = p_max;
     if (!(p > 0.0) || !(p <= p_max) || !T_of_p(p)) return false;
     if (!reproduces(pr.h, h) || !reproduces(pr.s, s)) return false;
     if (T < T_min || T > top_T(p)) return false;
@@ -550,7 +587,7 @@ State state_hs(double h, double s) {
     check_finite("s", Quantity::SpecificEntropy, s);
     double plo, phi;
     State lo, hi;
-    isentrope_bounds(s, plo, phi, lo, hi);
+    isentrope_bounds(s, h, plo, phi, lo, hi);
     // Within rounding of an end of the isentrope: that end.
     const double tol = 1e-12 * std::max(1.0, std::fabs(h));
     if (std::fabs(h - lo.h) <= tol) return lo;
