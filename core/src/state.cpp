@@ -578,7 +578,20 @@ bool hs_in_region(double h, double s, int r, double p0, double T0, State& out) {
 }
 
 // Regions to try for an (h,s) state near a seam, by the region Newton ended in.
-constexpr int kNeighbours[6][3] = {{0, 0, 0}, {1, 3, 0}, {2, 3, 5}, {3, 1, 2}, {0, 0, 0}, {5, 2, 0}};
+// A wet result that does not reproduce h ended on the jump where the dome
+// (regions 1/2 below 623.15 K, region 3 above) meets a single phase.
+constexpr int kNeighbours[6][3] = {{0, 0, 0}, {1, 3, 0}, {2, 3, 5}, {3, 1, 2}, {2, 3, 1}, {5, 2, 0}};
+
+// Within 1e-9 of the critical pressure (the accuracy to which (h,s) fixes p
+// near the critical point) a single-phase state counts as at pc, so that the
+// phase (decided by p >= pc) does not hang on the last bits.
+State snap_pc(State st) {
+    if (st.phase != Phase::TwoPhase && st.p < pc && std::fabs(st.p - pc) <= 1e-9 * pc) {
+        st.p = pc;
+        st.phase = st.T >= Tc ? Phase::Supercritical : Phase::Liquid;
+    }
+    return st;
+}
 
 }  // namespace
 
@@ -590,18 +603,17 @@ State state_hs(double h, double s) {
     isentrope_bounds(s, h, plo, phi, lo, hi);
     // Within rounding of an end of the isentrope: that end.
     const double tol = 1e-12 * std::max(1.0, std::fabs(h));
-    if (std::fabs(h - lo.h) <= tol) return lo;
-    if (std::fabs(h - hi.h) <= tol) return hi;
+    if (std::fabs(h - lo.h) <= tol) return snap_pc(lo);
+    if (std::fabs(h - hi.h) <= tol) return snap_pc(hi);
     // Beyond an end that lies on a region seam (e.g. 100 MPa at 623.15 K, where
     // state_ps gives region 1 but region 3 has the same entropy at a slightly
     // higher h): the neighbouring region's exact solution at that end.
     if (h < lo.h || h > hi.h) {
         const State& e = h < lo.h ? lo : hi;
-        if (e.region != 4)
-            for (int r : kNeighbours[e.region]) {
+        for (int r : kNeighbours[e.region]) {
                 State out;
-                if (r != 0 && r != e.region && hs_in_region(h, s, r, e.p, e.T, out)) return out;
-            }
+            if (r != 0 && r != e.region && hs_in_region(h, s, r, e.p, e.T, out)) return snap_pc(out);
+        }
     }
     if (h < lo.h || h > hi.h)
         throw RangeError("h", Quantity::SpecificEnergy, h, lo.h, hi.h,
@@ -628,12 +640,10 @@ State state_hs(double h, double s) {
     // (Sec. 10, Tables 43/44), and Newton can end on the seam with no exact
     // root in the region it tried. Solve in each adjacent region on its own
     // equation and return the exact solution.
-    if (st.region != 4) {
-        for (int r : kNeighbours[st.region]) {
-            if (r == 0) continue;
-            State out;
-            if (hs_in_region(h, s, r, st.p, st.T, out)) return out;
-        }
+    for (int r : kNeighbours[st.region]) {
+        if (r == 0) continue;
+        State out;
+        if (hs_in_region(h, s, r, st.p, st.T, out)) return snap_pc(out);
     }
     // A true gap between the regions' images in (h,s): the seam point, which
     // reproduces (h,s) within the permitted inconsistency of the regions.
