@@ -199,7 +199,25 @@ void check_region(Tally& t, const Row& r, const isentra::State& st) {
 // result in the neighbouring region is accepted (and counted) only if
 // (p', T') really belongs to that region and its basic equation reproduces
 // the given inputs within 1e-9. Anything else stays a failure.
+//
+// The saturation line has the same kind of seam at 623.15 K: below it the
+// saturated phases come from regions 1 and 2, above it from region 3
+// (R7-97(2012) Sec. 10.2 and Table 44), so a wet (h,s) within ~1 mK of
+// 623.15 K can have an exact wet solution on either side. Accepted likewise
+// if the wet state at (p', x') reproduces h and s within 1e-9.
 bool other_root(const isentra::State& b, int orig_region, double p_in, double h_in, double s_in) {
+    if (b.region == 4 && orig_region == 4) {
+        if (!(std::fabs(b.T - 623.15) < 0.01)) return false;  // R7-97(2012) Sec. 4: T_13 = 623.15 K
+        try {
+            const isentra::State c = isentra::state_px(b.p, b.x);
+            auto close = [](double a, double w) {
+                return std::isnan(w) || std::fabs(a - w) <= kRel * std::max(std::fabs(w), 1.0);
+            };
+            return close(c.h, h_in) && close(c.s, s_in);
+        } catch (const std::exception&) {
+            return false;
+        }
+    }
     const int r1 = std::min(orig_region, b.region), r2 = std::max(orig_region, b.region);
     if (!((r1 == 1 && r2 == 3) || (r1 == 2 && r2 == 3) || (r1 == 2 && r2 == 5))) return false;
     try {

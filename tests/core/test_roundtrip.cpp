@@ -476,7 +476,18 @@ TEST(RoundTripSaturationEdge, PhaseJustOffTheLine) {
             f.category(std::string("hs ") + c.name + band);
             if (c.want != Phase::TwoPhase &&
                 guarded(f, "state_hs", b.h, b.s, [&] { d = isentra::state_hs(b.h, b.s); })) {
-                f.check(d.phase == c.want && rel(d.p, p) <= kRel && std::fabs(d.T - b.T) <= kTolT,
+                // Ill-posed band, within 10 Pa of pc (p >= 22.06399 MPa): there an
+                // (h,s) 1e-9 off the saturation line is only ~1e-13 relative in p
+                // from the dome along its isentrope (ds''/dp grows like
+                // 1/sqrt(pc - p)), inside the rounding of Eq. 28 against Eq. 30
+                // (if97_r3sat.cpp). At 22.06399 MPa, h''(1+1e-9) comes back as a
+                // wet state at p 3.1e-12 MPa (1.4e-13 relative) higher that
+                // reproduces h and s to 4e-15: equally exact, so accepted there.
+                const bool ill_posed_ok =
+                    p >= if97::pc - 1e-5 && d.phase == Phase::TwoPhase && rel(d.p, p) <= kRel &&
+                    std::fabs(d.T - b.T) <= kTolT && rel1(d.h, b.h) <= kRel && rel1(d.s, b.s) <= kRel;
+                f.check((d.phase == c.want && rel(d.p, p) <= kRel && std::fabs(d.T - b.T) <= kTolT) ||
+                            ill_posed_ok,
                         "state_hs(%.17g, %.17g) [p=%.17g, %s] -> %s p=%.17g T=%.17g, want %s "
                         "p=%.17g T=%.17g",
                         b.h, b.s, p, c.name, ph(d.phase), d.p, d.T, ph(c.want), p, b.T);
@@ -512,6 +523,18 @@ TEST(RoundTripSaturationEdge, EquilibriumQualityOutsideTheDome) {
             State b;
             f.category(p > kPs623 ? "p>16.529" : "p<=16.529");
             if (!guarded(f, "state_ph", p, h, [&] { b = isentra::state_ph(p, h); })) continue;
+            if (b.T >= if97::Tc) {
+                // quality() is not defined at or above Tc (state.hpp): NotDefined.
+                bool threw = false;
+                try {
+                    (void)isentra::quality(b);
+                } catch (const isentra::Error& e) {
+                    threw = e.code() == isentra::ErrorCode::NotDefined;
+                }
+                f.check(threw, "quality(state_ph(%.17g, %.17g)) at T = %.17g >= Tc did not throw NotDefined",
+                        p, h, b.T);
+                continue;
+            }
             // State::x is NaN for a single-phase state (state.hpp); the
             // equilibrium quality is isentra::quality().
             f.check(std::isnan(b.x), "state_ph(%.17g, %.17g) [%s] x = %.17g, want NaN", p, h,
@@ -555,8 +578,15 @@ TEST(RoundTripCritical, AroundTheCriticalPoint) {
                 f.check(std::fabs(b.T - T) <= kTolT && b.phase == a.phase && rel1(b.s, a.s) <= kRel,
                         "state_ps(%.17g, %.17g) -> T=%.17g %s, want T=%.17g %s", p, a.s, b.T,
                         ph(b.phase), T, ph(a.phase));
+            // At T = Tc exactly the state sits on the liquid/supercritical
+            // boundary of the phase names; (h,s) fixes T there only to ~1e-9 K
+            // (7e-10 K at 22.065 MPa), so either name is right.
+            auto phase_ok = [&](Phase got) {
+                return got == a.phase || (T == if97::Tc && p >= if97::pc &&
+                                          (got == Phase::Liquid || got == Phase::Supercritical));
+            };
             if (guarded(f, "state_hs", a.h, a.s, [&] { b = isentra::state_hs(a.h, a.s); }))
-                f.check(std::fabs(b.T - T) <= kTolT && rel(b.p, p) <= kRel && b.phase == a.phase,
+                f.check(std::fabs(b.T - T) <= kTolT && rel(b.p, p) <= kRel && phase_ok(b.phase),
                         "state_hs(%.17g, %.17g) -> p=%.17g T=%.17g %s, want p=%.17g T=%.17g %s",
                         a.h, a.s, b.p, b.T, ph(b.phase), p, T, ph(a.phase));
         }
