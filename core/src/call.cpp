@@ -62,6 +62,7 @@ bool text_arg(const Table& t, const std::string& argname, std::string& out, Valu
     const Value& v = t.cells[0];
     if (v.kind == Value::Kind::Text) out = v.text;
     else if (v.kind == Value::Kind::Empty) out.clear();
+    else if (v.kind == Value::Kind::Number && v.number == 0.0) out.clear();  // Calc passes a blank cell as 0
     else if (v.kind == Value::Kind::Error) { err = v; return false; }
     else {
         err = Value::of_error(ErrorCode::InvalidArgument,

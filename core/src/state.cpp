@@ -652,7 +652,7 @@ State state_hs(double h, double s) {
 
 double quality(const State& st) {
     if (st.phase == Phase::TwoPhase) return st.x;
-    if (st.p >= pc || st.T >= Tc || st.p < pt)
+    if (st.p >= pc || st.p < pt)
         throw Error(ErrorCode::NotDefined,
                     "vapour quality is not defined for this state: it exists only below the critical pressure "
                     "(22.064 MPa) and above the triple-point pressure (611.657 Pa)");

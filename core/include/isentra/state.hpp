@@ -55,7 +55,7 @@ State state_Tx(double T, double x);  // T <= Tc, 0 <= x <= 1
 // Vapour quality of any state: inside the dome its x (0..1); outside it,
 // between the triple-point and critical pressures, the equilibrium quality
 // (h - h')/(h'' - h'): below 0 for subcooled liquid, above 1 for superheated
-// vapour. Throws NotDefined at or above the critical pressure/temperature.
+// vapour (at any temperature, also above Tc). Throws NotDefined at or above the critical pressure.
 double quality(const State& st);
 
 // Single-phase props by region, no range checks: used by the solver and tests.
