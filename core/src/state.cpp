@@ -595,9 +595,42 @@ State snap_pc(State st) {
 
 }  // namespace
 
+// Fast path of state_hs: Newton on p near the backward-equation pressure
+// (SR2-01, SR4-04). Returns false (and the caller takes the bounded path) if
+// any step leaves IF97's range or the result does not reproduce (h,s).
+bool hs_fast(double h, double s, State& out) {
+    double guess = std::numeric_limits<double>::quiet_NaN();
+    if (s >= 5.3) guess = region2_p_hs(h, s);
+    else if (s <= 3.6) guess = region1_p_hs(h, s);
+    else guess = region3_p_hs(h, s);
+    if (!(guess > pt && guess < p_max)) return false;
+    try {
+        auto f = [&](double p) {
+            const State st = state_ps(p, s);
+            return std::make_pair(st.h - h, st.v * 1e3);  // (dh/dp)_s = v; kJ/kg per MPa
+        };
+        std::uintmax_t it = 40;
+        double p = boost::math::tools::newton_raphson_iterate(f, guess, std::max(0.5 * guess, pt),
+                                                              std::min(2.0 * guess, p_max), kDigits, it);
+        if (it >= 40) return false;
+        if (std::fabs(p - pc) <= 1e-9 * pc) p = pc;
+        out = state_ps(p, s);
+        // Tighter than reproduces(): near the saturation line and the seams a
+        // state 1e-9 away may be another phase or region.
+        return std::fabs(out.h - h) <= 1e-13 * std::max(1.0, std::fabs(h)) &&
+               std::fabs(out.s - s) <= 1e-13 * std::max(1.0, std::fabs(s));
+    } catch (const std::exception&) {
+        return false;
+    }
+}
+
 State state_hs(double h, double s) {
     check_finite("h", Quantity::SpecificEnergy, h);
     check_finite("s", Quantity::SpecificEntropy, s);
+    {
+        State st;
+        if (hs_fast(h, s, st)) return st;
+    }
     double plo, phi;
     State lo, hi;
     isentrope_bounds(s, h, plo, phi, lo, hi);
