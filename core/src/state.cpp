@@ -266,27 +266,84 @@ State solve_rho_region3(double p, double y, Y which, double r1, double r2, doubl
     return from_props(pr, p, side);
 }
 
+// Fast path for region 3: two-dimensional Newton in (rho, T) on Eq. 28 for
+// p(rho,T) = p and y(rho,T) = y, started from the SR3-03 backward T and v.
+// Accepted only if it converges tightly inside [lo, hi] on a mechanically
+// stable point whose density is the branch's root at (p, T). (dp/dT)_rho comes from
+// cp - cv = T (dp/dT)_rho^2 / (rho^2 (dp/drho)_T), positive in region 3.
+bool newton2d_region3(double p, double y, Y which, double lo, double hi, int side, State& out) {
+    double T = which == Y::H ? region3_T_ph(p, y) : region3_T_ps(p, y);
+    const double v0 = which == Y::H ? region3_v_ph(p, y) : region3_v_ps(p, y);
+    if (!(T > 0 && v0 > 0)) return false;
+    // Near the critical point the Jacobian is nearly singular and the phase
+    // name hangs on the last bits of T: leave it to the one-dimensional solves.
+    if (p < 25.0 && std::fabs(T - Tc) < 2.0) return false;
+    double rho = 1.0 / v0;
+    for (int it = 0; it < 12; ++it) {
+        const Props pr = region3(rho, T);
+        if (!(pr.drhodp_T > 0) || !(pr.cp > pr.cv)) return false;
+        const double p_rho = 1.0 / pr.drhodp_T;                                        // MPa per kg/m3
+        const double p_T = std::sqrt(1e-3 * (pr.cp - pr.cv) * rho * rho * p_rho / T);  // MPa/K, > 0 in region 3
+        double y_rho, y_T;
+        if (which == Y::H) {
+            y_rho = 1e3 * (p_rho / rho - T * p_T / (rho * rho));
+            y_T = pr.cv + 1e3 * p_T / rho;
+        } else {
+            y_rho = -1e3 * p_T / (rho * rho);
+            y_T = pr.cv / T;
+        }
+        const double f1 = pr.p - p, f2 = yval(pr, which) - y;
+        const double det = p_rho * y_T - p_T * y_rho;
+        if (!(std::fabs(det) > 0)) return false;
+        const double d_rho = (f1 * y_T - p_T * f2) / det;
+        const double d_T = (p_rho * f2 - y_rho * f1) / det;
+        rho -= d_rho;
+        T -= d_T;
+        if (!(rho > 0 && T > 0)) return false;
+        if (std::fabs(d_rho) <= 1e-14 * rho && std::fabs(d_T) <= 1e-14 * T) break;
+    }
+    // Inside the T interval, and the density is the branch's own root of
+    // p(rho,T) = p: this rules out roots of Eq. 28 outside its region and on
+    // the other branch.
+    if (!(T >= lo && T <= hi)) return false;
+    if (std::fabs(r3_detail::pT_side(p, T, side).rho - rho) > 1e-9 * rho) return false;
+    const Props pr = region3(rho, T);
+    if (!(pr.drhodp_T > 0)) return false;
+    if (std::fabs(pr.p - p) > 1e-12 * p) return false;
+    if (std::fabs(yval(pr, which) - y) > 1e-12 * std::max(1.0, std::fabs(y))) return false;
+    out = from_props(pr, p);
+    return true;
+}
+
 // Region 3 at pressure p on one branch (side, see r3_detail::pT_side) between
-// lo and hi in T; rho_lo, rho_hi: densities bracketing the state along the
-// isobar, for the density fallback.
+// lo and hi in T; rho_ends(): the densities bracketing the state along the
+// isobar, for the density fallback (computed only when needed).
+template <class RhoEnds>
 State solve_region3(double p, double y, Y which, double lo, double hi, double guess, int side,
-                    double rho_a, double rho_b) {
+                    RhoEnds rho_ends) {
     State st;
-    bool have = false;
+    if (newton2d_region3(p, y, which, lo, hi, side, st)) {
+        st.phase = from_props(region3(st.rho, st.T), p, side).phase;  // the branch names the phase
+        return st;
+    }
     try {
         st = solve_T_in_region(p, y, which, 3, lo, hi, guess, side);
         if (reproduces(which == Y::H ? st.h : st.s, y)) return st;
-        have = true;
     } catch (const Error&) {
     }
     try {
-        return solve_rho_region3(p, y, which, rho_a, rho_b, std::clamp(guess, lo, hi), side);
+        const auto ends = rho_ends();
+        st = solve_rho_region3(p, y, which, ends.first, ends.second, std::clamp(guess, lo, hi), side);
+        if (reproduces(which == Y::H ? st.h : st.s, y)) return st;
+        throw Error(ErrorCode::NoConvergence, "no region-3 root");
     } catch (const Error&) {
         // No root in region 3 along this isobar: y lies in the band where the
         // regions meet only within R7-97(2012)'s permitted inconsistencies
-        // (Sec. 10, Tables 43/44); the T solve's end point on the seam stands.
-        if (have) return st;
-        throw;
+        // (Sec. 10, Table 43). The state is the seam point: the end of the
+        // region-3 interval whose y is nearer.
+        const Props a = r3_detail::pT_side(p, lo, side), b = r3_detail::pT_side(p, hi, side);
+        const bool at_hi = std::fabs(yval(b, which) - y) < std::fabs(yval(a, which) - y);
+        return from_props(at_hi ? b : a, p, side);
     }
 }
 
@@ -413,16 +470,18 @@ State state_py(double p, double y, Y which) {
             if (y <= yval(r13, which))
                 return solve_T_in_region(p, y, which, 1, T_min, T_13, backward_T(p, y, which, 1));
             // On the liquid branch of Eq. 28 up to Tsat itself.
-            return solve_region3(p, y, which, T_13, Ts, backward_T(p, y, which, 3), +1, sp.liq.rho,
-                                 r3_detail::pT_side(p, T_13, +1).rho);
+            return solve_region3(p, y, which, T_13, Ts, backward_T(p, y, which, 3), +1, [&] {
+                return std::make_pair(sp.liq.rho, r3_detail::pT_side(p, T_13, +1).rho);
+            });
         }
         // superheated vapour
         if (Ts <= T_13) return vapour_25(p, y, which, Ts);
         const double TB = b23_T(p);
         const Props rb = region2(p, TB);
         if (y < yval(rb, which))
-            return solve_region3(p, y, which, Ts, TB, backward_T(p, y, which, 3), -1, sp.vap.rho,
-                                 r3_detail::pT_side(p, TB, -1).rho);
+            return solve_region3(p, y, which, Ts, TB, backward_T(p, y, which, 3), -1, [&] {
+                return std::make_pair(sp.vap.rho, r3_detail::pT_side(p, TB, -1).rho);
+            });
         return vapour_25(p, y, which, TB);
     }
     // p >= pc: no dome.
@@ -431,8 +490,9 @@ State state_py(double p, double y, Y which) {
     const double TB = b23_T(p);
     const Props rb = region2(p, TB);
     if (y < yval(rb, which))
-        return solve_region3(p, y, which, T_13, TB, backward_T(p, y, which, 3), 0,
-                             r3_detail::pT_side(p, T_13, 0).rho, r3_detail::pT_side(p, TB, 0).rho);
+        return solve_region3(p, y, which, T_13, TB, backward_T(p, y, which, 3), 0, [&] {
+            return std::make_pair(r3_detail::pT_side(p, T_13, 0).rho, r3_detail::pT_side(p, TB, 0).rho);
+        });
     return vapour_25(p, y, which, TB);
 }
 
