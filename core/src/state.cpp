@@ -655,6 +655,91 @@ State snap_pc(State st) {
 
 }  // namespace
 
+// Fast path of state_hs inside the dome below 623.15 K: a wet state with
+// (h,s) lies on the isobar through its saturation temperature T, where
+// h = h' + x (h'' - h') with x = (s - s')/(s'' - s'). Newton on T (Boost.Math)
+// with the derivative of h' + T (s - s'), v' dps/dT + s - s'(T) (dps/dT by
+// Clapeyron from the saturated pair); start
+// from SR4-04 Tsat(h,s) where it applies. Accepted only if it converges
+// tightly with 0 <= x <= 1.
+bool hs_wet(double h, double s, State& out) {
+    double guess = s >= 5.210887825 ? tsat_hs(h, s) : 0.5 * (Tt + T_13);
+    if (!(guess >= Tt && guess <= T_13)) guess = 0.5 * (Tt + T_13);
+    try {
+        auto g = [&](double T) {
+            const double p = psat(T);
+            const Props l = region1(p, T), v = region2(p, T);
+            const double dpdT_term = l.v * (v.s - l.s) / (v.v - l.v);
+            // Exactly as two_phase() mixes: x from s, then h from x (h'' - h' equals
+            // T (s'' - s') only within IF97's inconsistency at the saturation line).
+            const double x = (s - l.s) / (v.s - l.s);
+            return std::make_pair(l.h + x * (v.h - l.h) - h, dpdT_term + s - l.s);
+        };
+        std::uintmax_t it = 40;
+        const double T = boost::math::tools::newton_raphson_iterate(g, guess, Tt, T_13, kDigits, it);
+        if (it >= 40) return false;
+        const double p = psat(T);
+        const SatPair sp{region1(p, T), region2(p, T)};
+        const double x = (s - sp.liq.s) / (sp.vap.s - sp.liq.s);
+        if (!(x >= 0.0 && x <= 1.0)) return false;
+        State st = two_phase(sp, p, T, x);
+        if (std::fabs(st.h - h) > 1e-12 * std::max(1.0, std::fabs(h))) return false;
+        st.h = h;
+        st.s = s;
+        out = st;
+        return true;
+    } catch (const std::exception&) {
+        return false;
+    }
+}
+
+// Fastest path of state_hs for regions 1, 2 and 5: two-dimensional Newton in
+// (p,T) on the Gibbs equation, from the SR2-01 p(h,s) and the R7-97 T(p,h)
+// backward values. Derivatives at constant T: (dh/dp)_T = v (1 - T alpha),
+// (ds/dp)_T = -v alpha, with the cubic expansion coefficient alpha from
+// cp - cv = T v alpha^2 / kappa_T (alpha > 0: regions 2 and 5, and region 1
+// above 300 K, clear of water's density maximum). Accepted only if it
+// converges tightly and (p,T) lies in the region whose equation was used.
+bool hs_gibbs2d(double h, double s, int region, State& out) {
+    double p = region == 1 ? region1_p_hs(h, s) : region2_p_hs(h, s);
+    if (!(p > 0 && p <= p_max)) return false;
+    double T = region == 1 ? region1_T_ph(p, h) : region2_T_ph(p, h);
+    if (region == 5) T = std::max(T, T_25);
+    if (!(T >= T_min && T <= T_max)) return false;
+    for (int it = 0; it < 12; ++it) {
+        const Props pr = props_region(p, T, region);
+        const double alpha2 = 1e-3 * (pr.cp - pr.cv) * pr.drhodp_T / T;
+        if (!(alpha2 > 0)) return false;
+        const double alpha = std::sqrt(alpha2);
+        const double h_p = 1e3 * pr.v * (1 - T * alpha), s_p = -1e3 * pr.v * alpha;
+        const double h_T = pr.cp, s_T = pr.cp / T;
+        const double f1 = pr.h - h, f2 = pr.s - s;
+        const double det = h_p * s_T - h_T * s_p;
+        if (!(std::fabs(det) > 0)) return false;
+        const double dp = (f1 * s_T - h_T * f2) / det;
+        const double dT = (h_p * f2 - s_p * f1) / det;
+        p -= dp;
+        T -= dT;
+        if (!(p > 0 && p <= p_max && T >= T_min - 50 && T <= T_max + 50)) return false;
+        if (std::fabs(dp) <= 1e-14 * p && std::fabs(dT) <= 1e-14 * T) break;
+    }
+    if (!(T >= T_min && T <= T_max)) return false;
+    if (region == 1 && T < 300.0) return false;
+    try {
+        check_pT(p, T);
+    } catch (const Error&) {
+        return false;
+    }
+    if (region_pT(p, T) != region) return false;
+    const Props pr = props_region(p, T, region);
+    if (std::fabs(pr.h - h) > 1e-13 * std::max(1.0, std::fabs(h)) ||
+        std::fabs(pr.s - s) > 1e-13 * std::max(1.0, std::fabs(s)))
+        return false;
+    if (std::fabs(p - pc) <= 1e-9 * pc) return false;  // leave the critical-pressure snap to the slow path
+    out = from_props(pr, p);
+    return true;
+}
+
 // Fast path of state_hs: Newton on p near the backward-equation pressure
 // (SR2-01, SR4-04). Returns false (and the caller takes the bounded path) if
 // any step leaves IF97's range or the result does not reproduce (h,s).
@@ -689,6 +774,15 @@ State state_hs(double h, double s) {
     check_finite("s", Quantity::SpecificEntropy, s);
     {
         State st;
+        // Which to try first: the SR4-04 saturation boundary equations say
+        // roughly whether (h,s) is wet; each path accepts only an exact state.
+        const bool maybe_wet = (s >= 5.85 && s <= 9.155759395 && h < b_h2ab_s(s) * (1 + 1e-3)) ||
+                               (s >= 5.210887825 && s < 5.85 && h < b_h2c3b_s(s) * (1 + 1e-3)) ||
+                               (s >= -1.545495919e-4 && s <= 3.778281340 && h < b_h1_s(s) * (1 + 1e-3));
+        if (maybe_wet && hs_wet(h, s, st)) return st;
+        if (s >= 5.3 ? (hs_gibbs2d(h, s, 2, st) || hs_gibbs2d(h, s, 5, st))
+                     : (s <= 3.6 && hs_gibbs2d(h, s, 1, st)))
+            return st;
         if (hs_fast(h, s, st)) return st;
     }
     double plo, phi;
