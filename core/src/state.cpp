@@ -306,7 +306,10 @@ bool newton2d_region3(double p, double y, Y which, double lo, double hi, int sid
     // p(rho,T) = p: this rules out roots of Eq. 28 outside its region and on
     // the other branch.
     if (!(T >= lo && T <= hi)) return false;
-    if (std::fabs(r3_detail::pT_side(p, T, side).rho - rho) > 1e-9 * rho) return false;
+    // (away from the critical point the SR5-05 backward density, which picks
+    // the branch by its subregions, is within 1e-3 of it; the two branches
+    // are much further apart there)
+    if (std::fabs(rho * region3_v_pT(p, T) - 1.0) > 1e-3) return false;
     const Props pr = region3(rho, T);
     if (!(pr.drhodp_T > 0)) return false;
     if (std::fabs(pr.p - p) > 1e-12 * p) return false;
@@ -436,19 +439,34 @@ State state_py(double p, double y, Y which) {
     const Quantity q = yq(which);
     const char* name = yname(which);
     const double p_dome_min = psat(T_min);  // 611.213 Pa: below it no liquid exists in IF97
-    // Range of y at this pressure: 273.15 K .. the top temperature.
-    const Props lowest = p >= p_dome_min ? region1(p, T_min) : region2(p, T_min);
-    const double ylow = yval(lowest, which);
-    if (y < ylow)
-        throw RangeError(name, q, y, ylow, none,
-                         "at this pressure (colder than 273.15 K, the lower limit of IAPWS-IF97)");
-    const double yhigh = yval(props_region(p, top_T(p), top_region(p)), which);
-    if (y > yhigh)
-        throw RangeError(name, q, y, none, yhigh,
-                         p <= p_max5 ? "at this pressure (hotter than 2273.15 K, the upper limit of IAPWS-IF97)"
-                                     : "at this pressure (hotter than 1073.15 K, the limit of IAPWS-IF97 above 50 MPa)");
+    // Range of y at this pressure: 273.15 K .. the top temperature. Checked
+    // only on the branches that can reach those ends (liquid: the low end;
+    // regions 2 and 5: both ends below 611.213 Pa, the high end otherwise).
+    auto check_low = [&] {
+        const Props lowest = p >= p_dome_min ? region1(p, T_min) : region2(p, T_min);
+        const double ylow = yval(lowest, which);
+        if (y < ylow)
+            throw RangeError(name, q, y, ylow, none,
+                             "at this pressure (colder than 273.15 K, the lower limit of IAPWS-IF97)");
+    };
+    auto vapour = [&](double T_from) {
+        const double yhigh = yval(props_region(p, top_T(p), top_region(p)), which);
+        if (y > yhigh)
+            throw RangeError(name, q, y, none, yhigh,
+                             p <= p_max5
+                                 ? "at this pressure (hotter than 2273.15 K, the upper limit of IAPWS-IF97)"
+                                 : "at this pressure (hotter than 1073.15 K, the limit of IAPWS-IF97 above 50 MPa)");
+        return vapour_25(p, y, which, T_from);
+    };
+    auto liquid = [&](double T_to) {
+        check_low();
+        return solve_T_in_region(p, y, which, 1, T_min, T_to, backward_T(p, y, which, 1));
+    };
 
-    if (p < p_dome_min) return vapour_25(p, y, which, T_min);
+    if (p < p_dome_min) {
+        check_low();
+        return vapour(T_min);
+    }
 
     if (p < pc) {
         const double Ts = tsat(p);
@@ -465,35 +483,34 @@ State state_py(double p, double y, Y which) {
             return st;
         }
         if (y < yl) {  // compressed liquid
-            if (Ts <= T_13) return solve_T_in_region(p, y, which, 1, T_min, Ts, backward_T(p, y, which, 1));
+            if (Ts <= T_13) return liquid(Ts);
             const Props r13 = region1(p, T_13);
-            if (y <= yval(r13, which))
-                return solve_T_in_region(p, y, which, 1, T_min, T_13, backward_T(p, y, which, 1));
+            if (y <= yval(r13, which)) return liquid(T_13);
             // On the liquid branch of Eq. 28 up to Tsat itself.
             return solve_region3(p, y, which, T_13, Ts, backward_T(p, y, which, 3), +1, [&] {
                 return std::make_pair(sp.liq.rho, r3_detail::pT_side(p, T_13, +1).rho);
             });
         }
         // superheated vapour
-        if (Ts <= T_13) return vapour_25(p, y, which, Ts);
+        if (Ts <= T_13) return vapour(Ts);
         const double TB = b23_T(p);
         const Props rb = region2(p, TB);
         if (y < yval(rb, which))
             return solve_region3(p, y, which, Ts, TB, backward_T(p, y, which, 3), -1, [&] {
                 return std::make_pair(sp.vap.rho, r3_detail::pT_side(p, TB, -1).rho);
             });
-        return vapour_25(p, y, which, TB);
+        return vapour(TB);
     }
     // p >= pc: no dome.
     const Props r13 = region1(p, T_13);
-    if (y <= yval(r13, which)) return solve_T_in_region(p, y, which, 1, T_min, T_13, backward_T(p, y, which, 1));
+    if (y <= yval(r13, which)) return liquid(T_13);
     const double TB = b23_T(p);
     const Props rb = region2(p, TB);
     if (y < yval(rb, which))
         return solve_region3(p, y, which, T_13, TB, backward_T(p, y, which, 3), 0, [&] {
             return std::make_pair(r3_detail::pT_side(p, T_13, 0).rho, r3_detail::pT_side(p, TB, 0).rho);
         });
-    return vapour_25(p, y, which, TB);
+    return vapour(TB);
 }
 
 }  // namespace

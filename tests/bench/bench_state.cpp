@@ -32,6 +32,9 @@ void State_T_ph_region2(benchmark::State& s) {
 void State_T_ph_region3(benchmark::State& s) {
     for (auto _ : s) benchmark::DoNotOptimize(state_ph(25.0, 1800.0).T);
 }
+void State_T_ph_region3_below_pc(benchmark::State& s) {
+    for (auto _ : s) benchmark::DoNotOptimize(state_ph(20.0, 1700.0).T);
+}
 void State_T_ph_wet(benchmark::State& s) {
     for (auto _ : s) benchmark::DoNotOptimize(state_ph(0.01, 2000.0).T);
 }
@@ -61,6 +64,7 @@ BENCHMARK(State_h_pT_region5);
 BENCHMARK(State_T_ph_region1);
 BENCHMARK(State_T_ph_region2);
 BENCHMARK(State_T_ph_region3);
+BENCHMARK(State_T_ph_region3_below_pc);
 BENCHMARK(State_T_ph_wet);
 BENCHMARK(State_T_ps_region1);
 BENCHMARK(State_T_ps_region2);
