@@ -132,28 +132,7 @@ double get(const State& st, Prop p) {
 }
 
 // Saturated-liquid or -vapour State from a saturation State (x = 0 one).
-State side_state(const State& sat, bool vapour) {
-    const if97::Props& pr = vapour ? sat.vap : sat.liq;
-    State st;
-    st.T = pr.T;
-    st.p = pr.p;
-    st.v = pr.v;
-    st.rho = pr.rho;
-    st.u = pr.u;
-    st.h = pr.h;
-    st.s = pr.s;
-    st.cp = pr.cp;
-    st.cv = pr.cv;
-    st.w = pr.w;
-    st.kappa = pr.w * pr.w * pr.rho / (pr.p * 1e6);
-    st.drhodp_T = pr.drhodp_T;
-    st.x = vapour ? 1.0 : 0.0;
-    st.region = pr.region;
-    st.phase = vapour ? Phase::Vapour : Phase::Liquid;
-    st.liq = sat.liq;
-    st.vap = sat.vap;
-    return st;
-}
+State side_state(const State& sat, bool vapour) { return with_quality(sat, vapour ? 1.0 : 0.0); }
 
 bool is_critical(const State& sat) { return sat.liq.rho == sat.vap.rho; }
 

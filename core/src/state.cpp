@@ -409,16 +409,19 @@ State saturation_p(double p) {
     return two_phase(sp, p, T, 0.0);
 }
 
+State with_quality(const State& sat, double x) {
+    check_x(x);
+    return two_phase(SatPair{sat.liq, sat.vap}, sat.p, sat.T, x);
+}
+
 State state_px(double p, double x) {
     check_x(x);
-    State st = saturation_p(p);
-    return two_phase(SatPair{st.liq, st.vap}, p, st.T, x);
+    return with_quality(saturation_p(p), x);
 }
 
 State state_Tx(double T, double x) {
     check_x(x);
-    State st = saturation_T(T);
-    return two_phase(SatPair{st.liq, st.vap}, st.p, T, x);
+    return with_quality(saturation_T(T), x);
 }
 
 State state_pT(double p, double T) {

@@ -44,6 +44,12 @@ struct State {
 State saturation_p(double p);
 State saturation_T(double T);
 
+// The state at vapour quality x (0..1) on the saturation line of a
+// saturation state `sat` (from saturation_p/T), without solving again.
+// x = 0 and x = 1 give the saturated liquid and vapour with their
+// single-phase properties (cp, w, ...) defined.
+State with_quality(const State& sat, double x);
+
 // Single-state solvers. Inputs in core units.
 State state_pT(double p, double T);  // throws Impossible if (p,T) lies exactly on the saturation line
 State state_ph(double p, double h);
