@@ -136,10 +136,11 @@ def test_sheet(readings, chart_cell_xml):
     rows.append(row([c_text("CAUTION: results used for operation or design decisions are to be checked under local codes"
                             " by a licensed engineer. Isentra comes without any warranty.", "caution")]))
     rows.append(row([c_empty()]))
-    rows.append(row([c_text("Units (SI or US) for the whole workbook", "label"), c_text("SI", "input"),
-                     c_text("SI: MPa (absolute), °C, kJ/kg, kJ/(kg·K).  US: psia, °F, Btu/lbm, Btu/(lbm·°F).")]))
-    rows.append(row([c_text("Pressure instrument uncertainty (fraction of reading)", "label"), c_num(U_P, "input")]))
-    rows.append(row([c_text("Temperature instrument uncertainty", "label"), c_num(U_T, "input"),
+    rows.append(row([c_text("Units for the whole workbook", "label"), c_text("SI", "input"),
+                     c_text("SI or US. SI: MPa (absolute), °C, kJ/kg, kJ/(kg·K).  US: psia, °F, Btu/lbm, Btu/(lbm·°F).")]))
+    rows.append(row([c_text("Pressure uncertainty, fraction", "label"), c_num(U_P, "input"),
+                     c_text("instrument uncertainty as a fraction of the reading (0.0025 = 0.25 %)")]))
+    rows.append(row([c_text("Temperature uncertainty", "label"), c_num(U_T, "input"),
                      c_formula(f'IF(UPPER({u})="US";"°F";"K")')]))
     for s, d in zip(SECTIONS, DESIGN):
         rows.append(row([c_text(f"Design efficiency, {s} section", "label"), c_num(d, "input_pct")]))
