@@ -271,7 +271,7 @@ State solve_rho_region3(double p, double y, Y which, double r1, double r2, doubl
 // Accepted only if it converges tightly inside [lo, hi] on a mechanically
 // stable point whose density is the branch's root at (p, T). (dp/dT)_rho comes from
 // cp - cv = T (dp/dT)_rho^2 / (rho^2 (dp/drho)_T), positive in region 3.
-bool newton2d_region3(double p, double y, Y which, double lo, double hi, int side, State& out) {
+bool newton2d_region3(double p, double y, Y which, double lo, double hi, State& out) {
     double T = which == Y::H ? region3_T_ph(p, y) : region3_T_ps(p, y);
     const double v0 = which == Y::H ? region3_v_ph(p, y) : region3_v_ps(p, y);
     if (!(T > 0 && v0 > 0)) return false;
@@ -325,7 +325,7 @@ template <class RhoEnds>
 State solve_region3(double p, double y, Y which, double lo, double hi, double guess, int side,
                     RhoEnds rho_ends) {
     State st;
-    if (newton2d_region3(p, y, which, lo, hi, side, st)) {
+    if (newton2d_region3(p, y, which, lo, hi, st)) {
         st.phase = from_props(region3(st.rho, st.T), p, side).phase;  // the branch names the phase
         return st;
     }
