@@ -40,7 +40,8 @@ std::string explain(const Error& e, const units::UnitSpec& spec) {
     if (lo && hi)
         m += " is outside the range " + fmt(u(re->low())) + " to " + with_unit(u(re->high()), sym);
     else if (lo)
-        m += " is below the minimum " + with_unit(u(re->low()), sym);
+        m += (re->value() == re->low() ? " is at the limit " : " is below the minimum ") +
+             with_unit(u(re->low()), sym);
     else if (hi)
         m += " is above the maximum " + with_unit(u(re->high()), sym);
     else

@@ -107,10 +107,11 @@ State ps(double p, double s, const Names& n) {
 // pressure (as quality() gives it, but also for steam hotter than Tc, e.g. a
 // high-pressure turbine exhaust); NaN at or above the critical pressure.
 double quality_or_nan(const State& st) {
-    if (st.phase == Phase::TwoPhase) return st.x;
-    if (!(st.p >= if97::pt && st.p < pc)) return nan_v;
-    const State sat = saturation_p(st.p);
-    return (st.h - sat.liq.h) / (sat.vap.h - sat.liq.h);
+    try {
+        return quality(st);
+    } catch (const Error&) {
+        return nan_v;
+    }
 }
 
 // True if a (p,T) reading is on or inside the wet region (or, below the
@@ -127,11 +128,15 @@ State steam_pT(double p, double T, const Names& n, const char* role, const std::
     check_finite(n.p, Quantity::Pressure, p);
     check_finite(n.T, Quantity::Temperature, T);
     double Ts = nan_v;
-    auto wet = [&]() -> Error {
-        return Error(ErrorCode::Impossible,
-                     std::string("the ") + role + " reading " + reading(n.p, p, n.T, T) +
-                         " lies on or inside the wet region (at or below the saturation temperature " + num(Ts) +
-                         " K at this pressure), where p and T do not fix the enthalpy; " + instead);
+    // A RangeError (code Impossible) so that front ends word it in the user's
+    // units: "T_out = 40 °C is below the minimum 45.8 °C (the outlet reading
+    // lies on or inside the wet region ...)".
+    auto wet = [&]() -> RangeError {
+        return RangeError(n.T, Quantity::Temperature, T, Ts, nan_v,
+                          std::string("(the saturation temperature at ") + n.p + ": the " + role +
+                              " reading lies on or inside the wet region, where p and T do not fix the "
+                              "enthalpy; " + instead + ")",
+                          ErrorCode::Impossible);
     };
     if (p > 0 && p <= if97::p_max && at_or_below_tsat(p, T, Ts) && T >= if97::T_min) throw wet();
     State st;

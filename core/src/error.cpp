@@ -44,7 +44,7 @@ std::string range_message(const std::string& input, Quantity q, double value, do
     if (!std::isnan(low) && !std::isnan(high))
         m += " is outside " + num(low) + " to " + num(high) + us;
     else if (!std::isnan(low))
-        m += " is below the minimum " + num(low) + us;
+        m += (value == low ? " is at the limit " : " is below the minimum ") + num(low) + us;
     else if (!std::isnan(high))
         m += " is above the maximum " + num(high) + us;
     else
@@ -56,8 +56,8 @@ std::string range_message(const std::string& input, Quantity q, double value, do
 }  // namespace
 
 RangeError::RangeError(const std::string& input, Quantity quantity, double value, double low,
-                       double high, const std::string& context)
-    : Error(ErrorCode::OutOfRange, range_message(input, quantity, value, low, high, context)),
+                       double high, const std::string& context, ErrorCode code)
+    : Error(code, range_message(input, quantity, value, low, high, context)),
       input_(input), quantity_(quantity), value_(value), low_(low), high_(high),
       context_(context) {}
 

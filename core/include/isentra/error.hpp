@@ -40,8 +40,11 @@ private:
 // context - optional words saying which limit ("at this pressure", "region 5")
 class RangeError : public Error {
 public:
+    // code: OutOfRange, or Impossible where the limit is a physical one (e.g. a
+    // steam reading at or below the saturation temperature).
     RangeError(const std::string& input, Quantity quantity, double value, double low,
-               double high, const std::string& context = {});
+               double high, const std::string& context = {},
+               ErrorCode code = ErrorCode::OutOfRange);
     const std::string& input() const noexcept { return input_; }
     Quantity quantity() const noexcept { return quantity_; }
     double value() const noexcept { return value_; }
