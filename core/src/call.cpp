@@ -43,7 +43,8 @@ std::string explain(const Error& e, const units::UnitSpec& spec) {
         m += (re->value() == re->low() ? " is at the limit " : " is below the minimum ") +
              with_unit(u(re->low()), sym);
     else if (hi)
-        m += " is above the maximum " + with_unit(u(re->high()), sym);
+        m += (re->value() == re->high() ? " is at the limit " : " is above the maximum ") +
+             with_unit(u(re->high()), sym);
     else
         m += " is out of range";
     if (!re->context().empty()) m += " " + re->context();

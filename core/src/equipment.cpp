@@ -30,12 +30,6 @@ std::string num(double v) {
     return buf;
 }
 
-// "p_out = 0.01 MPa, T_out = 318.9 K (45.75 degC)"
-std::string reading(const char* pn, double p, const char* tn, double T) {
-    return std::string(pn) + " = " + num(p) + " MPa, " + tn + " = " + num(T) + " K (" + num(T - 273.15) +
-           " degC)";
-}
-
 void check_finite(const char* name, Quantity q, double v) {
     if (!std::isfinite(v)) throw RangeError(name, q, v, none, none);
 }
@@ -150,10 +144,10 @@ State steam_pT(double p, double T, const Names& n, const char* role, const std::
         throw wet();
     }
     if (st.phase == Phase::Liquid)
-        throw Error(ErrorCode::Impossible,
-                    std::string("the ") + role + " reading " + reading(n.p, p, n.T, T) +
-                        " is compressed water (above the critical pressure 22.064 MPa and below the critical "
-                        "temperature 647.096 K), not steam");
+        throw RangeError(n.T, Quantity::Temperature, T, Tc, nan_v,
+                         std::string("(the critical temperature: below it, above the critical pressure, the ") +
+                             role + " reading is compressed water, not steam)",
+                         ErrorCode::Impossible);
     return st;
 }
 
@@ -341,13 +335,19 @@ Pumping pump_pT(double p_in, double T_in, double p_out, double eta) {
     check_finite("T_in", Quantity::Temperature, T_in);
     const Names n{"p_in", "T_in", "h_in", "s_in"};
     double Ts = nan_v;
-    auto not_liquid = [&](const std::string& why) {
-        return Error(ErrorCode::Impossible, "the pump inlet " + reading("p_in", p_in, "T_in", T_in) + " " + why +
-                                                "; a pump takes subcooled water (T_in below the saturation "
-                                                "temperature at p_in)");
+    // Not subcooled water: a RangeError of kind Impossible on T_in, so that
+    // front ends word it in the user's units.
+    auto not_liquid = [&]() {
+        const bool sub = p_in < pc;
+        const double limit = sub ? if97::tsat(p_in) : Tc;
+        return RangeError("T_in", Quantity::Temperature, T_in, nan_v, limit,
+                          sub ? "(the saturation temperature at p_in, or at it: a pump takes subcooled water)"
+                              : "(the critical temperature: above it the fluid at p_in is supercritical, "
+                                "not water)",
+                          ErrorCode::Impossible);
     };
     if (p_in > 0 && p_in <= if97::p_max && T_in >= if97::T_min && at_or_below_tsat(p_in, T_in, Ts) && T_in == Ts)
-        throw not_liquid("lies on the saturation line (" + num(Ts) + " K)");
+        throw not_liquid();
     State in;
     try {
         in = pT(p_in, T_in, n);
@@ -355,12 +355,9 @@ Pumping pump_pT(double p_in, double T_in, double p_out, double eta) {
         throw;
     } catch (const Error& e) {
         if (e.code() != ErrorCode::Impossible) throw;
-        throw not_liquid("lies on the saturation line");
+        throw not_liquid();
     }
-    if (in.phase != Phase::Liquid)
-        throw not_liquid(in.phase == Phase::Supercritical ? "is a supercritical fluid, not water"
-                                                           : "is steam, above the saturation temperature " +
-                                                                 num(if97::tsat(p_in)) + " K at this pressure");
+    if (in.phase != Phase::Liquid) throw not_liquid();
     check_finite("p_out", Quantity::Pressure, p_out);
     if (p_out < p_in)
         throw RangeError("p_out", Quantity::Pressure, p_out, p_in, none,
@@ -449,9 +446,10 @@ double desuperheater_spray(double m_steam, double p_steam, double T_steam, doubl
     const State out = pT(p_steam, T_out, Names{"p_steam", "T_out", "h_out", "s_out"});
     const State water = pT(p_water, T_water, Names{"p_water", "T_water", "h_water", "s_water"});
     if (water.phase != Phase::Liquid)
-        throw Error(ErrorCode::Impossible, "the spray water " + reading("p_water", p_water, "T_water", T_water) +
-                                               " is not liquid water (it is at or above its saturation or critical "
-                                               "temperature)");
+        throw RangeError("T_water", Quantity::Temperature, T_water, nan_v,
+                         p_water < pc ? if97::tsat(p_water) : Tc,
+                         "(the saturation or critical temperature at p_water: spray water must be liquid)",
+                         ErrorCode::Impossible);
     if (!(water.h < out.h))
         throw Error(ErrorCode::Impossible, "the spray water's enthalpy (" + num(water.h) +
                                                " kJ/kg) is not below the outlet enthalpy (" + num(out.h) +

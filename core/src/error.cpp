@@ -46,7 +46,7 @@ std::string range_message(const std::string& input, Quantity q, double value, do
     else if (!std::isnan(low))
         m += (value == low ? " is at the limit " : " is below the minimum ") + num(low) + us;
     else if (!std::isnan(high))
-        m += " is above the maximum " + num(high) + us;
+        m += (value == high ? " is at the limit " : " is above the maximum ") + num(high) + us;
     else
         m += " is out of range";
     if (!context.empty()) m += " " + context;
