@@ -81,6 +81,20 @@ Table call_convert(const Function&, const std::vector<Table>& args) {
     std::string from, to;
     Value err;
     if (!text_arg(args[1], "from", from, err) || !text_arg(args[2], "to", to, err)) return error_table(err);
+    // A gauge unit may carry the local barometric pressure, as in a unit
+    // text: "psig patm=14.2psia". Default: the standard atmosphere.
+    double patm = units::standard_atmosphere_MPa;
+    for (std::string* t : {&from, &to}) {
+        const std::size_t k = t->find("patm=");
+        if (k == std::string::npos) continue;
+        try {
+            patm = units::UnitSpec::parse("SI " + t->substr(k)).patm_MPa();
+        } catch (const Error& e) {
+            return error_table(Value::of_error(e.code(), e.what()));
+        }
+        t->erase(k);
+        while (!t->empty() && (t->back() == ' ' || t->back() == ',' || t->back() == ';')) t->pop_back();
+    }
     const Table& val = args[0];
     Table out;
     out.rows = val.rows;
@@ -99,7 +113,7 @@ Table call_convert(const Function&, const std::vector<Table>& args) {
             continue;
         }
         try {
-            out.cells[i] = Value::of(units::convert(v.number, from, to));
+            out.cells[i] = Value::of(units::convert(v.number, from, to, patm));
         } catch (const Error& e) {
             out.cells[i] = Value::of_error(e.code(), e.what());
         }

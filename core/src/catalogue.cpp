@@ -357,7 +357,8 @@ std::vector<Function> build() {
         f.category = "Steam utilities";
         f.summary = "Converts a value between two units of the same kind, e.g. "
                     "STEAM.CONVERT(150; \"psig\"; \"MPa\"). Gauge pressures are relative to the standard "
-                    "atmosphere (101.325 kPa); temperature differences use delta units (\"dK\", \"ddegF\").";
+                    "atmosphere (101.325 kPa) unless the unit text gives the local one, e.g. \"psig patm=14.2psia\"; "
+                    "temperature differences use delta units (\"delta_K\", \"delta_degF\").";
         f.args = {Arg{"value", Quantity::None, "The value to convert, in unit 'from'"},
                   Arg{"from", Quantity::Text, "Unit of the value, e.g. \"psig\", \"degF\", \"Btu/lbm\""},
                   Arg{"to", Quantity::Text, "Unit wanted, e.g. \"MPa\", \"degC\", \"kJ/kg\""}};
