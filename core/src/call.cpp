@@ -112,8 +112,15 @@ Table call_convert(const Function&, const std::vector<Table>& args) {
                                            "the argument value is the text \"" + v.text + "\" where a number is expected");
             continue;
         }
+        if (!std::isfinite(v.number)) {
+            out.cells[i] = Value::of_error(ErrorCode::InvalidArgument, "the argument value is not a finite number");
+            continue;
+        }
         try {
-            out.cells[i] = Value::of(units::convert(v.number, from, to, patm));
+            const double r = units::convert(v.number, from, to, patm);
+            out.cells[i] = std::isfinite(r) ? Value::of(r)
+                                            : Value::of_error(ErrorCode::OutOfRange,
+                                                              "the converted value is too large to represent");
         } catch (const Error& e) {
             out.cells[i] = Value::of_error(e.code(), e.what());
         }
