@@ -182,19 +182,17 @@ double solve_bracket(G g, double lo, double hi, const char* what) {
     return 0.5 * (res.first + res.second);
 }
 
-// Region by (p,T), p and T already range-checked. 0 = exactly on saturation.
-// (p,T) on the saturation line: p = psat(T) or T = tsat(p) to the last bit
-// (the two equations invert each other only to rounding).
-bool on_saturation(double p, double T) {
-    if (T > Tc || p > pc || p < psat(T_min)) return false;
-    const double ps = psat(T);
-    if (p == ps) return true;
-    return std::fabs(p - ps) <= 1e-12 * ps && tsat(p) == T;
-}
-
+// Region of a range-checked (p,T); 0 = on the saturation line: p = psat(T)
+// or T = tsat(p) to the last bit (the two equations invert each other only
+// to rounding).
 int region_pT(double p, double T) {
-    if (on_saturation(p, T)) return 0;
-    if (T <= T_13) return p > psat(T) ? 1 : 2;
+    if (T <= Tc && p <= pc) {
+        const double ps = psat(T);  // once: this is the hot path of every (p,T) call
+        if (p == ps || (std::fabs(p - ps) <= 1e-12 * ps && tsat(p) == T)) return 0;
+        if (T <= T_13) return p > ps ? 1 : 2;
+    } else if (T <= T_13) {
+        return 1;  // above the critical pressure
+    }
     if (T <= T_25) return (T <= 863.15 && p > b23_p(T)) ? 3 : 2;
     return 5;
 }
