@@ -390,9 +390,11 @@ Props props_pT_region(double p, double T, int region) { return props_region(p, T
 
 State saturation_T(double T) {
     check_finite("T", Quantity::Temperature, T);
-    if (T < Tt || T > Tc)
-        throw RangeError("T", Quantity::Temperature, T, Tt, Tc,
-                         "(saturation exists from the triple point to the critical point)");
+    // IF97's saturation line, Eq. 30, runs from 273.15 K (R7-97(2012) Sec. 8.1);
+    // by pressure (saturation_p) it starts at the triple-point pressure.
+    if (T < T_min || T > Tc)
+        throw RangeError("T", Quantity::Temperature, T, T_min, Tc,
+                         "(the saturation line of IAPWS-IF97, 273.15 K to the critical point)");
     const SatPair sp = sat_pair_T(T);
     return two_phase(sp, T == Tc ? pc : psat(T), T, 0.0);
 }
