@@ -139,7 +139,8 @@ bool is_critical(const State& sat) { return sat.liq.rho == sat.vap.rho; }
 double sat_get(const State& sat, Prop p, int side /*0 f, 1 g, 2 fg*/) {
     if (side == 2) return get(side_state(sat, true), p) - get(side_state(sat, false), p);
     if (is_critical(sat) && (p == Prop::CP || p == Prop::W || p == Prop::KAPPA || p == Prop::CV ||
-                             p == Prop::LAMBDA || p == Prop::ALPHA || p == Prop::PR))
+                             p == Prop::MU || p == Prop::NU || p == Prop::LAMBDA || p == Prop::ALPHA ||
+                             p == Prop::PR))
         throw Error(ErrorCode::NotDefined,
                     "this property is not defined at the critical point (p = 22.064 MPa, T = "
                     "647.096 K), where it diverges");
