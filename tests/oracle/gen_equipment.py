@@ -7,7 +7,7 @@ Python). Every state property in it comes from python3-iapws 1.5.2 (Debian),
 run with Debian's /usr/bin/python3, through its IAPWS97 class only (inputs
 (P,T), (P,s), (P,h), (P,x)). That package is GPL: this script only calls it
 and records the numbers it returns; no code of it is read or copied. The
-equipment formulas applied here on top of those states are the textbook
+equipment formulas applied here on top of those states are the standard
 definitions written out independently below (eta = (h_in - h_out) / (h_in -
 h_s), energy balances, Tsat differences); the uncertainty rows take their
 sensitivities by central finite differences of python3-iapws numbers, not by
