@@ -317,7 +317,7 @@ std::vector<Function> build() {
                       "Pressure, from the triple point (611.657 Pa) to the critical pressure (22.064 MPa)"},
                   units_arg()};
         f.result = Quantity::Temperature;
-        f.eval = [](const double* a, double* o) { o[0] = saturation_p(a[0]).T; };
+        f.eval = [](const double* a, double* o) { o[0] = saturation_temperature(a[0]); };
         out.push_back(std::move(f));
     }
     {
@@ -330,7 +330,7 @@ std::vector<Function> build() {
                       "Temperature, from 273.15 K (0 degC) to the critical temperature (647.096 K)"},
                   units_arg()};
         f.result = Quantity::Pressure;
-        f.eval = [](const double* a, double* o) { o[0] = saturation_T(a[0]).p; };
+        f.eval = [](const double* a, double* o) { o[0] = saturation_pressure(a[0]); };
         out.push_back(std::move(f));
     }
     add_saturation_family(out);

@@ -461,13 +461,13 @@ double desuperheater_spray(double m_steam, double p_steam, double T_steam, doubl
 
 double fwh_ttd(double p_shell, double T_fw_out) {
     check_T("T_fw_out", T_fw_out);
-    State sat;
+    double Ts = 0;
     try {
-        sat = saturation_p(p_shell);
+        Ts = saturation_temperature(p_shell);
     } catch (const RangeError& e) {
         rename(e, Names{"p_shell", nullptr, nullptr, nullptr});
     }
-    return sat.T - T_fw_out;
+    return Ts - T_fw_out;
 }
 
 double fwh_dca(double T_drain, double T_fw_in) {

@@ -388,25 +388,32 @@ const char* phase_name(Phase phase) {
 
 Props props_pT_region(double p, double T, int region) { return props_region(p, T, region); }
 
-State saturation_T(double T) {
+double saturation_pressure(double T) {
     check_finite("T", Quantity::Temperature, T);
     // IF97's saturation line, Eq. 30, runs from 273.15 K (R7-97(2012) Sec. 8.1);
-    // by pressure (saturation_p) it starts at the triple-point pressure.
+    // by pressure (saturation_temperature) it starts at the triple-point pressure.
     if (T < T_min || T > Tc)
         throw RangeError("T", Quantity::Temperature, T, T_min, Tc,
                          "(the saturation line of IAPWS-IF97, 273.15 K to the critical point)");
-    const SatPair sp = sat_pair_T(T);
-    return two_phase(sp, T == Tc ? pc : psat(T), T, 0.0);
+    return T == Tc ? pc : psat(T);
 }
 
-State saturation_p(double p) {
+double saturation_temperature(double p) {
     check_finite("p", Quantity::Pressure, p);
     if (p < pt || p > pc)
         throw RangeError("p", Quantity::Pressure, p, pt, pc,
                          "(saturation exists from the triple point to the critical point)");
-    const double T = p == pc ? Tc : tsat(p);
-    const SatPair sp = sat_pair_T(T);
-    return two_phase(sp, p, T, 0.0);
+    return p == pc ? Tc : tsat(p);
+}
+
+State saturation_T(double T) {
+    const double p = saturation_pressure(T);
+    return two_phase(sat_pair_T(T), p, T, 0.0);
+}
+
+State saturation_p(double p) {
+    const double T = saturation_temperature(p);
+    return two_phase(sat_pair_T(T), p, T, 0.0);
 }
 
 State with_quality(const State& sat, double x) {

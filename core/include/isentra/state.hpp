@@ -38,6 +38,12 @@ struct State {
     if97::Props liq{}, vap{};
 };
 
+// Saturation temperature (K) at p in [pt, pc], and saturation pressure (MPa)
+// at T in [273.15 K, Tc], range-checked like saturation_p/T but without the
+// saturated liquid and vapour states (R7-97(2012) Eqs. 31 and 30).
+double saturation_temperature(double p);
+double saturation_pressure(double T);
+
 // Saturation: p in [pt, pc] or T in [273.15 K, Tc]. The result is a
 // two-phase State at x = 0 with liq and vap filled. At exactly the critical
 // point liq == vap.
