@@ -167,20 +167,15 @@ Table call(const Function& f, const std::vector<Table>& args) {
 
         // Units.
         units::UnitSpec spec;
-        std::size_t units_index = f.args.size();
-        if (f.has_units_arg()) {
-            units_index = f.args.size() - 1;
-            for (std::size_t i = 0; i < f.args.size(); ++i)
-                if (f.args[i].name == "units") units_index = i;
-            if (units_index < args.size()) {
-                std::string text;
-                Value err;
-                if (!text_arg(args[units_index], "units", text, err)) return error_table(err);
-                try {
-                    spec = units::UnitSpec::parse(text);
-                } catch (const Error& e) {
-                    return error_table(Value::of_error(e.code(), e.what()));
-                }
+        const std::size_t units_index = f.units_index();
+        if (units_index < args.size()) {
+            std::string text;
+            Value err;
+            if (!text_arg(args[units_index], "units", text, err)) return error_table(err);
+            try {
+                spec = units::UnitSpec::parse(text);
+            } catch (const Error& e) {
+                return error_table(Value::of_error(e.code(), e.what()));
             }
         }
 

@@ -401,11 +401,13 @@ std::string unit_pair(Quantity q) {
 
 }  // namespace
 
-bool Function::has_units_arg() const {
-    for (const Arg& a : args)
-        if (a.name == "units" && a.quantity == Quantity::Text) return true;
-    return false;
+std::size_t Function::units_index() const {
+    for (std::size_t i = 0; i < args.size(); ++i)
+        if (args[i].name == "units" && args[i].quantity == Quantity::Text) return i;
+    return args.size();
 }
+
+bool Function::has_units_arg() const { return units_index() < args.size(); }
 
 const std::vector<Function>& functions() {
     static const std::vector<Function> all = build();  // built once, immutable afterwards

@@ -56,6 +56,7 @@ struct Function {
     std::vector<std::string> row_names;
     std::vector<Quantity> row_quantities;
     bool has_units_arg() const;  // one argument is the optional "units" text
+    std::size_t units_index() const;  // its position; args.size() if there is none
 };
 
 const std::vector<Function>& functions();
