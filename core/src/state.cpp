@@ -386,8 +386,6 @@ const char* phase_name(Phase phase) {
     return "";
 }
 
-Props props_pT_region(double p, double T, int region) { return props_region(p, T, region); }
-
 double saturation_pressure(double T) {
     check_finite("T", Quantity::Temperature, T);
     // IF97's saturation line, Eq. 30, runs from 273.15 K (R7-97(2012) Sec. 8.1);

@@ -70,7 +70,4 @@ State state_Tx(double T, double x);  // T <= Tc, 0 <= x <= 1
 // vapour (at any temperature, also above Tc). Throws NotDefined at or above the critical pressure.
 double quality(const State& st);
 
-// Single-phase props by region, no range checks: used by the solver and tests.
-if97::Props props_pT_region(double p, double T, int region);
-
 }  // namespace isentra
