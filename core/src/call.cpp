@@ -22,33 +22,10 @@ std::string fmt(double v) {
     return buf;
 }
 
-std::string with_unit(double v, const std::string& sym) { return sym.empty() ? fmt(v) : fmt(v) + " " + sym; }
-
 // Re-words a core error in the user's units.
 std::string explain(const Error& e, const units::UnitSpec& spec) {
     const auto* re = dynamic_cast<const RangeError*>(&e);
-    if (!re) return e.what();
-    const Quantity q = re->quantity();
-    auto u = [&](double v) { return spec.from_core(q, v); };
-    const std::string sym = spec.symbol(q);
-    std::string m;
-    if (std::isnan(re->value()))
-        m = re->input() + " is not a number";
-    else
-        m = re->input() + " = " + with_unit(u(re->value()), sym);
-    const bool lo = !std::isnan(re->low()), hi = !std::isnan(re->high());
-    if (lo && hi)
-        m += " is outside the range " + fmt(u(re->low())) + " to " + with_unit(u(re->high()), sym);
-    else if (lo)
-        m += (re->value() == re->low() ? " is at the limit " : " is below the minimum ") +
-             with_unit(u(re->low()), sym);
-    else if (hi)
-        m += (re->value() == re->high() ? " is at the limit " : " is above the maximum ") +
-             with_unit(u(re->high()), sym);
-    else
-        m += " is out of range";
-    if (!re->context().empty()) m += " " + re->context();
-    return m;
+    return re ? re->sentence(spec) : e.what();
 }
 
 Value error_value(const Error& e, const units::UnitSpec& spec) { return Value::of_error(e.code(), explain(e, spec)); }

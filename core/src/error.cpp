@@ -1,33 +1,13 @@
 // SPDX-License-Identifier: MPL-2.0
 #include "isentra/error.hpp"
 
+#include <cmath>
 #include <cstdio>
+
+#include "isentra/units.hpp"
 
 namespace isentra {
 namespace {
-
-const char* core_unit(Quantity q) {
-    switch (q) {
-    case Quantity::Pressure: return "MPa";
-    case Quantity::Temperature: return "K";
-    case Quantity::TemperatureDifference: return "K";
-    case Quantity::SpecificEnergy: return "kJ/kg";
-    case Quantity::SpecificEntropy: return "kJ/(kg K)";
-    case Quantity::SpecificVolume: return "m3/kg";
-    case Quantity::Density: return "kg/m3";
-    case Quantity::Speed: return "m/s";
-    case Quantity::DynamicViscosity: return "Pa s";
-    case Quantity::ThermalConductivity: return "W/(m K)";
-    case Quantity::SurfaceTension: return "N/m";
-    case Quantity::KinematicViscosity:
-    case Quantity::ThermalDiffusivity: return "m2/s";
-    case Quantity::MassFlow: return "kg/s";
-    case Quantity::Power: return "kW";
-    case Quantity::HeatRate: return "kJ/kWh";
-    case Quantity::Percent: return "%";
-    default: return "";
-    }
-}
 
 std::string num(double v) {
     char buf[32];
@@ -35,30 +15,42 @@ std::string num(double v) {
     return buf;
 }
 
-std::string range_message(const std::string& input, Quantity q, double value, double low,
-                          double high, const std::string& context) {
-    const std::string u = core_unit(q);
-    const std::string us = u.empty() ? "" : " " + u;
-    std::string m = input + " = " + num(value) + us;
-    if (std::isnan(value)) m = input + " is not a number";
-    if (!std::isnan(low) && !std::isnan(high))
-        m += " is outside " + num(low) + " to " + num(high) + us;
-    else if (!std::isnan(low))
-        m += (value == low ? " is at the limit " : " is below the minimum ") + num(low) + us;
-    else if (!std::isnan(high))
-        m += (value == high ? " is at the limit " : " is above the maximum ") + num(high) + us;
+// One sentence for an input outside [low, high], in the units of `spec`.
+std::string range_sentence(const std::string& input, Quantity q, double value, double low, double high,
+                           const std::string& context, const units::UnitSpec& spec) {
+    auto u = [&](double v) { return spec.from_core(q, v); };
+    const std::string sym = spec.symbol(q);
+    auto with_unit = [&](double v) { return sym.empty() ? num(v) : num(v) + " " + sym; };
+    std::string m = std::isnan(value) ? input + " is not a number" : input + " = " + with_unit(u(value));
+    const bool lo = !std::isnan(low), hi = !std::isnan(high);
+    if (lo && hi)
+        m += " is outside the range " + num(u(low)) + " to " + with_unit(u(high));
+    else if (lo)
+        m += (value == low ? " is at the limit " : " is below the minimum ") + with_unit(u(low));
+    else if (hi)
+        m += (value == high ? " is at the limit " : " is above the maximum ") + with_unit(u(high));
     else
         m += " is out of range";
     if (!context.empty()) m += " " + context;
     return m;
 }
 
+// Core units: MPa and kelvin, the rest as in SI (quantity.hpp).
+const units::UnitSpec& core_units() {
+    static const units::UnitSpec spec = units::UnitSpec::parse("K");  // built once, immutable
+    return spec;
+}
+
 }  // namespace
 
 RangeError::RangeError(const std::string& input, Quantity quantity, double value, double low,
                        double high, const std::string& context, ErrorCode code)
-    : Error(code, range_message(input, quantity, value, low, high, context)),
+    : Error(code, range_sentence(input, quantity, value, low, high, context, core_units())),
       input_(input), quantity_(quantity), value_(value), low_(low), high_(high),
       context_(context) {}
+
+std::string RangeError::sentence(const units::UnitSpec& spec) const {
+    return range_sentence(input_, quantity_, value_, low_, high_, context_, spec);
+}
 
 }  // namespace isentra

@@ -12,6 +12,10 @@
 
 namespace isentra {
 
+namespace units {
+class UnitSpec;
+}
+
 enum class ErrorCode {
     OutOfRange,      // an input lies outside the validity range of the formulation
     NotDefined,      // the property is not defined for this state (e.g. cp inside the dome)
@@ -51,6 +55,8 @@ public:
     double low() const noexcept { return low_; }
     double high() const noexcept { return high_; }
     const std::string& context() const noexcept { return context_; }
+    // The sentence in the units of `spec` (what() gives it in core units).
+    std::string sentence(const units::UnitSpec& spec) const;
 
 private:
     std::string input_;
