@@ -311,6 +311,28 @@ std::string functions_md(const std::vector<cat::Function>& fs) {
             o << "\nUNO method: `org.isentra.XSteamFunctions::" << f.method << "`\n";
         }
     }
+
+    // Units, from the core's unit table (the same one the functions use).
+    o << "\n## Units\n\n"
+      << "The `units` argument names a unit system, optionally followed by overrides of single "
+         "quantities as `key=unit`, e.g. \"US p=psig\", \"SI p=barg T=K\", \"BAR h=kcal/kg\". "
+         "Gauge pressures are relative to the standard atmosphere (101.325 kPa) unless the text gives "
+         "the local barometric pressure, e.g. \"US p=psig patm=14.2psia\". Unit spellings are "
+         "case-insensitive where that is unambiguous. Temperature differences (superheat, "
+         "subcooling, approach, rise) convert as differences. Conversion factors are exact from "
+         "NIST SP 811 (2008) Appendix B and the international yard and pound.\n\n"
+      << "| system | units (override key, unit) |\n|---|---|\n";
+    for (const auto& sys : isentra::units::known_systems())
+        o << "| " << md(sys.name) << " | " << md(sys.description) << " |\n";
+    o << "\nEvery unit, by quantity (the symbol is what `STEAM.CONVERT` and overrides accept):\n";
+    std::vector<isentra::Quantity> qs;
+    for (const auto& u : isentra::units::known_units())
+        if (std::find(qs.begin(), qs.end(), u.quantity) == qs.end()) qs.push_back(u.quantity);
+    for (const isentra::Quantity q : qs) {
+        o << "\n**" << md(std::string(isentra::units::quantity_name(q))) << "**\n\n| unit | meaning |\n|---|---|\n";
+        for (const auto& u : isentra::units::known_units())
+            if (u.quantity == q) o << "| `" << u.symbol << "` | " << md(u.description) << " |\n";
+    }
     return o.str();
 }
 

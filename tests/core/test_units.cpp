@@ -77,6 +77,13 @@ TEST(UnitsFactors, Pressure) {
     // NIST SP 811 (2008) B.8: millimeter of mercury, conventional (mmHg) -> Pa 1.333224 E+02
     expect_printed(u::convert(1.0, "mmHg", "Pa"), 1.333224e2, 7, "mmHg");
     expect_exact(u::convert(1.0, "mmHg", "Pa"), 133.322387415, "mmHg from 13595.1 kg/m3 * g_n * 1 mm");  // from the definitions
+    // NIST SP 811 (2008) B.8: bar -> Pa 1.0 E+05 (exact), with the SI prefix milli (exact)
+    expect_exact(u::convert(1.0, "mbar", "Pa"), 100.0, "mbar");
+    // absolute spellings plant people write for condenser pressure (common practice)
+    for (const char* a : {"mbar(a)", "mbara", "mbar abs"}) expect_exact(u::convert(1.0, a, "Pa"), 100.0, a);
+    for (const char* a : {"inHgA", "inHg(a)", "inHg abs", "in HgA"})
+        expect_exact(u::convert(1.0, a, "Pa"), 3386.388640341, a);
+    for (const char* a : {"mmHgA", "mmHg(a)", "mmHg abs"}) expect_exact(u::convert(1.0, a, "Pa"), 133.322387415, a);
     // SI prefixes (exact by definition)
     expect_exact(u::convert(1.0, "MPa", "kPa"), 1000.0, "MPa/kPa");
     expect_exact(u::convert(1.0, "kPa", "Pa"), 1000.0, "kPa/Pa");
@@ -599,7 +606,7 @@ TEST(UnitsCatalogue, KnownUnitsAndSystems) {
         return false;
     };
     for (const char* s : {"MPa", "kPa", "Pa", "bar", "psia", "psig", "barg", "kPag", "MPag", "inHg", "mmHg", "atm",
-                          "kgf/cm2"})
+                          "kgf/cm2", "mbar"})
         EXPECT_TRUE(has(Quantity::Pressure, s)) << s;
     for (const char* s : {"degC", "K", "degF", "degR"}) EXPECT_TRUE(has(Quantity::Temperature, s)) << s;
     for (const char* s : {"delta_K", "delta_degC", "delta_degF", "delta_degR"})
