@@ -70,6 +70,7 @@ void print_help(std::FILE* out) {
          "\n"
          "Options:\n"
          "  --list       every function with its arguments and one-line description\n"
+         "  --units      every unit: quantity, symbol and meaning (tab separated)\n"
          "  --help, -h   this text\n"
          "  --version    the version\n"
          "  --           the remaining arguments are calls\n"
@@ -158,6 +159,13 @@ void evaluate_line(std::string line) {
     std::fflush(stdout);  // one answer per line as it comes (usable as a co-process)
 }
 
+// One line per unit: quantity, symbol (as CONVERT and overrides take it), meaning.
+void print_units(std::FILE* out) {
+    for (const auto& u : isentra::units::known_units())
+        std::fprintf(out, "%s\t%s\t%s\n", std::string(isentra::units::quantity_name(u.quantity)).c_str(),
+                     u.symbol.c_str(), u.description.c_str());
+}
+
 int usage_error(const std::string& message) {
     std::fprintf(stderr, "isentra: %s\nTry 'isentra --help'.\n", message.c_str());
     return exit_usage;
@@ -167,7 +175,7 @@ int usage_error(const std::string& message) {
 
 int main(int argc, char** argv) {
     bool options_done = false;
-    enum class Action { Help, List, Version, Call };
+    enum class Action { Help, List, Units, Version, Call };
     std::vector<std::pair<Action, std::string>> actions;
     for (int k = 1; k < argc; ++k) {
         const std::string a = argv[k];
@@ -175,6 +183,7 @@ int main(int argc, char** argv) {
             if (a == "--") options_done = true;
             else if (a == "--help" || a == "-h") actions.emplace_back(Action::Help, "");
             else if (a == "--list") actions.emplace_back(Action::List, "");
+            else if (a == "--units") actions.emplace_back(Action::Units, "");
             else if (a == "--version") actions.emplace_back(Action::Version, "");
             else return usage_error("unknown option '" + a + "'");
             continue;
@@ -186,6 +195,7 @@ int main(int argc, char** argv) {
         switch (action) {
             case Action::Help: print_help(stdout); break;
             case Action::List: print_list(stdout); break;
+            case Action::Units: print_units(stdout); break;
             case Action::Version: print_version(stdout); break;
             case Action::Call: evaluate_line(text); break;
         }

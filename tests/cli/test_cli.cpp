@@ -17,6 +17,7 @@
 #include <vector>
 
 #include "isentra/catalogue.hpp"
+#include "isentra/units.hpp"
 
 namespace {
 
@@ -253,6 +254,26 @@ TEST(CliOptions, ListHasOneLinePerFunction) {
     bool found = false;
     for (const auto& l : r.lines) found = found || starts_with(l, "STEAM.H.PT(p; T; [units])\t");
     EXPECT_TRUE(found);
+}
+
+TEST(CliOptions, UnitsListsEveryUnitOnce) {
+    const Outcome r = run({"--units"}, "H.PT(3;300)\n");  // standard input is not read
+    EXPECT_EQ(r.status, 0);
+    const auto& us = isentra::units::known_units();
+    ASSERT_EQ(r.lines.size(), us.size());
+    for (std::size_t k = 0; k < us.size(); ++k) {
+        const auto f = fields(r.lines[k]);
+        ASSERT_EQ(f.size(), 3u) << r.lines[k];
+        EXPECT_EQ(f[0], std::string(isentra::units::quantity_name(us[k].quantity)));
+        EXPECT_EQ(f[1], us[k].symbol);
+        EXPECT_EQ(f[2], us[k].description);
+    }
+    // every symbol listed is accepted by STEAM.CONVERT (converted to itself)
+    std::string calls;
+    for (const auto& u : us) calls += "STEAM.CONVERT(2.5; \"" + u.symbol + "\"; \"" + u.symbol + "\")\n";
+    const Outcome c = run({}, calls);
+    ASSERT_EQ(c.lines.size(), us.size());
+    for (std::size_t k = 0; k < us.size(); ++k) EXPECT_NEAR(number(c.lines[k]), 2.5, 1e-12) << us[k].symbol;
 }
 
 TEST(CliOptions, Help) {
