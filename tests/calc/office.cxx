@@ -226,7 +226,10 @@ Office::Office() {
         as_user = {"setpriv", "--reuid=" + std::to_string(unprivileged_id),
                    "--regid=" + std::to_string(unprivileged_id), "--clear-groups"};
     }
-    as_user.insert(as_user.end(), {"env", "HOME=" + home, "LANG=C.UTF-8", "LC_ALL=C.UTF-8"});
+    // -C: start in our own world-readable directory; the office's start script changes back
+    // to its working directory and fails if the unprivileged user cannot enter it (a clone
+    // under /root, mode 0700).
+    as_user.insert(as_user.end(), {"env", "-C", dir_, "HOME=" + home, "LANG=C.UTF-8", "LC_ALL=C.UTF-8"});
     const std::string program = ISENTRA_LO_PROGRAM_DIR;
     const std::string user_installation = "-env:UserInstallation=file://" + profile;
     const std::string log = dir_ + "/office.log";
