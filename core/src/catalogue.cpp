@@ -102,9 +102,17 @@ const PropSpec props[] = {
                     "saturated-vapour (G) function, e.g. STEAM.CPF.P or STEAM.CPG.P");
 }
 
+[[noreturn]] void at_critical(const char* what) {
+    throw Error(ErrorCode::NotDefined,
+                std::string(what) +
+                    " is not defined at the critical point (p = 22.064 MPa, T = 647.096 K) or on the limit "
+                    "of stability next to it (saturated states within about 3e-5 K of Tc), where it "
+                    "diverges");
+}
+
 double single_phase(const State& st, double value, const char* what) {
     if (st.phase == Phase::TwoPhase && !(st.x == 0.0 || st.x == 1.0)) not_in_dome(what);
-    if (!std::isfinite(value)) not_in_dome(what);
+    if (critical_singularity(st.T, st.p, st.drhodp_T) || !std::isfinite(value)) at_critical(what);
     return value;
 }
 
@@ -134,16 +142,11 @@ double get(const State& st, Prop p) {
 // Saturated-liquid or -vapour State from a saturation State (x = 0 one).
 State side_state(const State& sat, bool vapour) { return with_quality(sat, vapour ? 1.0 : 0.0); }
 
-bool is_critical(const State& sat) { return sat.liq.rho == sat.vap.rho; }
-
 double sat_get(const State& sat, Prop p, int side /*0 f, 1 g, 2 fg*/) {
     if (side == 2) return get(side_state(sat, true), p) - get(side_state(sat, false), p);
-    if (is_critical(sat) && (p == Prop::CP || p == Prop::W || p == Prop::KAPPA || p == Prop::CV ||
-                             p == Prop::MU || p == Prop::NU || p == Prop::LAMBDA || p == Prop::ALPHA ||
-                             p == Prop::PR))
-        throw Error(ErrorCode::NotDefined,
-                    "this property is not defined at the critical point (p = 22.064 MPa, T = "
-                    "647.096 K), where it diverges");
+    // At the critical point cp, cv, w, kappa and the transport properties are
+    // errors (critical_singularity): the saturated states there carry an
+    // infinite (d rho/d p)_T.
     return get(side_state(sat, side == 1), p);
 }
 

@@ -33,6 +33,7 @@
 // branch's nearest approach to p.
 #include <algorithm>
 #include <cmath>
+#include <limits>
 #include <cstdint>
 
 #include <boost/math/policies/policy.hpp>
@@ -222,11 +223,21 @@ Props pT_side(double p, double T, int side) {
 
 Props region3_pT(double p, double T) { return r3_detail::pT_side(p, T, 0); }
 
+namespace {
+// A state on the limit of stability, (dp/drho)_T = 0, or the critical point
+// itself: cp and (d rho/d p)_T are infinite there (rounding would otherwise
+// leave huge numbers of either sign).
+Props singular(Props c) {
+    c.cp = c.drhodp_T = std::numeric_limits<double>::infinity();
+    return c;
+}
+}  // namespace
+
 SatPair region3_saturation(double T) {
     if (!(T < Tc)) {
         // The critical point (R7-97(2012) Eqs. 2-4 and Sec. 7: Eq. 28 meets it
         // exactly): rho' = rho'' = rhoc.
-        const Props c = region3(rhoc, T);
+        const Props c = singular(region3(rhoc, T));
         return SatPair{c, c};
     }
     const double ps = psat(T);
@@ -241,7 +252,7 @@ SatPair region3_saturation(double T) {
     // Close to Tc: bracket each root between its spinodal and a far density.
     const Spinodals s = spinodals(T, rv0, rl0);
     if (!s.loop) {
-        const Props c = region3(rhoc, T);
+        const Props c = singular(region3(rhoc, T));
         return SatPair{c, c};
     }
     const double psv = region3_p(s.rsv, T);
@@ -251,6 +262,8 @@ SatPair region3_saturation(double T) {
     const double pe = std::min(std::max(ps, psl), psv);
     out.liq = region3(liquid_root(pe, T, s.rsl, psl, s.b), T);
     out.vap = region3(vapour_root(pe, T, s.a, s.rsv, psv), T);
+    if (ps < psl) out.liq = singular(out.liq);  // the liquid sits on its spinodal
+    if (ps > psv) out.vap = singular(out.vap);  // the vapour sits on its spinodal
     return out;
 }
 

@@ -414,6 +414,11 @@ State saturation_p(double p) {
     return two_phase(sat_pair_T(T), p, T, 0.0);
 }
 
+bool critical_singularity(double T, double p, double drhodp_T) noexcept {
+    if (!(drhodp_T > 0.0) || !std::isfinite(drhodp_T)) return true;
+    return std::fabs(T - Tc) <= 1e-9 * Tc && std::fabs(p - pc) <= 1e-9 * pc;
+}
+
 State with_quality(const State& sat, double x) {
     check_x(x);
     return two_phase(SatPair{sat.liq, sat.vap}, sat.p, sat.T, x);

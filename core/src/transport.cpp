@@ -330,7 +330,18 @@ bool near_critical(const PhaseData& d) {
     return d.T < a_b[0] + r * (a_b[1] + r * (a_b[2] + r * a_b[3]));
 }
 
+// No finite transport property at the critical point or on the stability
+// limit next to it (see isentra::critical_singularity).
+void require_regular(const PhaseData& d) {
+    if (critical_singularity(d.T, d.p, d.drhodp))
+        throw Error(ErrorCode::NotDefined,
+                    "transport properties are not defined at the critical point (p = 22.064 MPa, T = 647.096 K) "
+                    "or on the limit of stability next to it (saturated states within about 3e-5 K of Tc), "
+                    "where they diverge");
+}
+
 double mu_of(const PhaseData& d) {
+    require_regular(d);
     const double rb = d.rho / rho_star, Tb = d.T / T_star;
     double m = mu01_bar(rb, Tb);
     if (near_critical(d)) m *= mu2_of_xi(xi_bar(rb, Tb, d.drhodp * zeta_scale, zeta_TR_bar(rb)));
@@ -338,6 +349,7 @@ double mu_of(const PhaseData& d) {
 }
 
 double lambda_of(const PhaseData& d) {
+    require_regular(d);
     const double rb = d.rho / rho_star, Tb = d.T / T_star;
     const double mu_ind = mu01_bar(rb, Tb) * mu_star;  // R15-11 Sec. 3.1: industrial viscosity
     return terms(d.rho, d.T, d.cp, d.cv, mu_ind, d.drhodp * zeta_scale, zeta_TR_bar(rb),

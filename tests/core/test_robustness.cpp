@@ -81,3 +81,57 @@ TEST(Robustness, EveryFunctionAnyInput) {
 }
 
 }  // namespace
+
+// ---------------------------------------------------------------------------
+// Near the critical point, properties that diverge there (cp, cv, w, kappa and
+// the transport properties) are either positive finite numbers or NotDefined
+// errors, never negative or absurd numbers. Found by a differential run
+// against python3-iapws 1.5.2 (Debian), which itself gives negative cp for
+// saturated vapour within ~3e-5 K of Tc: there the region-3 saturated vapour
+// (or liquid) density has no root of Eq. 28 at ps(T) and sits on the
+// stability limit (see if97_r3sat.cpp), where cp is infinite.
+// ---------------------------------------------------------------------------
+TEST(Robustness, DivergingPropertiesNearTheCriticalPoint) {
+    namespace cat = isentra::catalogue;
+    const char* props[] = {"CP", "CV", "W", "KAPPA", "MU", "LAMBDA", "NU", "PR"};
+    const double pc = 22.064, tc = 373.946;  // R7-97(2012) Eqs. 2 and 3, in MPa and degC
+    int numbers = 0, errors = 0;
+    auto check = [&](const std::string& name, std::vector<double> args) {
+        const cat::Function* f = cat::find(name);
+        if (!f && name.find('.', 6) == name.size() - 2) return;  // no F/G function for this property
+        ASSERT_NE(f, nullptr) << name;
+        std::vector<Table> in;
+        for (double a : args) in.push_back(Table::scalar(Value::of(a)));
+        const Value v = isentra::call(*f, in).cells[0];
+        if (v.kind == Value::Kind::Number) {
+            ++numbers;
+            EXPECT_TRUE(std::isfinite(v.number) && v.number > 0.0) << name << " " << args[0] << " -> " << v.number;
+            // (no upper bound: along the saturation line cp grows like 1/(Tc - T))
+        } else {
+            ++errors;
+            ASSERT_EQ(v.kind, Value::Kind::Error) << name;
+            if (v.error == isentra::ErrorCode::NotDefined) {
+                EXPECT_EQ(v.text.find("wet"), std::string::npos) << name << " " << args[0] << ": " << v.text;
+            }
+        }
+    };
+    for (int k = 0; k <= 400; ++k) {
+        // pressures from pc - 1e-3 MPa to pc, densest at pc
+        const double dp = 1e-3 * std::pow(10.0, -8.0 * k / 400.0);
+        const double p = k == 400 ? pc : pc - dp;
+        const double dt = 1e-2 * std::pow(10.0, -8.0 * k / 400.0);
+        const double t = k == 400 ? tc : tc - dt;
+        for (const char* pr : props) {
+            const std::string s(pr);
+            check("STEAM." + s + "F.P", {p});
+            check("STEAM." + s + "G.P", {p});
+            check("STEAM." + s + "F.T", {t});
+            check("STEAM." + s + "G.T", {t});
+            check("STEAM." + s + ".PX", {p, 0.0});
+            check("STEAM." + s + ".PX", {p, 1.0});
+            check("STEAM." + s + ".PT", {pc, tc + dt});  // supercritical side along pc
+        }
+    }
+    EXPECT_GT(numbers, 5000);
+    EXPECT_GT(errors, 0);
+}

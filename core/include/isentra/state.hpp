@@ -56,6 +56,13 @@ State saturation_T(double T);
 // single-phase properties (cp, w, ...) defined.
 State with_quality(const State& sat, double x);
 
+// True where cp, cv, w, the isentropic exponent and the transport properties
+// have no finite IAPWS-IF97 value: at the critical point itself (T and p
+// within 1e-9 relative of Tc and pc) and on the limit of mechanical stability
+// ((d rho/d p)_T not finite and positive), which the region-3 saturated
+// states reach within about 3e-5 K of Tc. cp diverges at both.
+bool critical_singularity(double T, double p, double drhodp_T) noexcept;
+
 // Single-state solvers. Inputs in core units.
 State state_pT(double p, double T);  // throws Impossible if (p,T) lies exactly on the saturation line
 State state_ph(double p, double h);
