@@ -19,6 +19,7 @@
 #include <array>
 #include <charconv>
 #include <cmath>
+#include <cstdio>
 #include <cstring>
 
 #include "isentra/error.hpp"
@@ -833,8 +834,27 @@ double convert(double value, std::string_view from, std::string_view to, double 
                 throw Error(ErrorCode::InvalidArgument,
                             "the barometric pressure for a gauge unit must be a positive number of MPa, not " +
                                 format_number(patm_MPa));
+            if (!std::isfinite(value))
+                throw Error(ErrorCode::InvalidArgument, "the value to convert must be a finite number");
+            const double core = core_of(uf, value, patm_MPa);
+            // Absolute temperatures and pressures cannot be negative (a gauge
+            // pressure can, down to -patm).
+            auto g10 = [](double v) {  // the limit, rounded for the sentence
+                char b[32];
+                std::snprintf(b, sizeof b, "%.10g", v);
+                return std::string(b);
+            };
+            if (uf.quantity == Q::Temperature && core < -1e-9)
+                throw Error(ErrorCode::OutOfRange, "T = " + format_number(value) + " " + uf.display +
+                                                       " is below absolute zero (" +
+                                                       g10(user_of(uf, 0.0, patm_MPa)) + " " + uf.display + ")");
+            if (uf.quantity == Q::Pressure && core < -1e-12)
+                throw Error(ErrorCode::OutOfRange,
+                            "p = " + format_number(value) + " " + uf.display + " is below zero absolute pressure (" +
+                                g10(user_of(uf, 0.0, patm_MPa)) + " " + uf.display + ")");
             if (&uf == &ut) return value;
-            return user_of(ut, core_of(uf, value, patm_MPa), patm_MPa);
+            const bool absolute = uf.quantity == Q::Temperature || uf.quantity == Q::Pressure;
+            return user_of(ut, absolute && core < 0.0 ? 0.0 : core, patm_MPa);  // -0 from rounding: 0
         }
     throw Error(ErrorCode::InvalidArgument, "cannot convert " + std::string(quantity_name(f.u[0]->quantity)) + " " +
                                                 quoted(from) + " to " +

@@ -550,6 +550,16 @@ TEST(UnitsErrors, Convert) {
     EXPECT_TRUE(contains(what_of([] { u::convert(1.0, "m/s", "parsec/s"); }), "unknown unit 'parsec/s'"));
     EXPECT_TRUE(contains(what_of([] { u::convert(1.0, "US", "SI"); }), "unit system"));
     EXPECT_EQ(code_of([] { u::convert(1.0, "", "MPa"); }), ErrorCode::UnknownUnit);
+    // Below absolute zero and below zero absolute pressure (common practice).
+    EXPECT_EQ(what_of([] { u::convert(-500.0, "degC", "K"); }), "T = -500 °C is below absolute zero (-273.15 °C)");
+    EXPECT_EQ(code_of([] { u::convert(-1.0, "K", "degC"); }), ErrorCode::OutOfRange);
+    EXPECT_EQ(code_of([] { u::convert(-460.0, "degF", "degF"); }), ErrorCode::OutOfRange);
+    EXPECT_EQ(what_of([] { u::convert(-10.0, "psia", "MPa"); }), "p = -10 psia is below zero absolute pressure (0 psia)");
+    EXPECT_EQ(code_of([] { u::convert(-15.0, "psig", "psia"); }), ErrorCode::OutOfRange);  // below -14.696 psig
+    EXPECT_NEAR(u::convert(-14.0, "psig", "psia"), 0.6959487763, 1e-9);  // a vacuum reading is fine
+    EXPECT_EQ(u::convert(-40.0, "degC", "degF"), -40.0);  // -40 °C = -40 °F (from the definitions)
+    EXPECT_NEAR(u::convert(-5.0, "delta_degC", "delta_degF"), -9.0, 1e-12);  // differences may be negative
+    EXPECT_EQ(code_of([] { u::convert(std::nan(""), "MPa", "bar"); }), ErrorCode::InvalidArgument);
 }
 
 TEST(UnitsErrors, Parse) {
