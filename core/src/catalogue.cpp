@@ -192,6 +192,9 @@ void add_property_family(std::vector<Function>& out) {
             if (ps.prop == Prop::CP || ps.prop == Prop::CV || ps.prop == Prop::W ||
                 ps.prop == Prop::KAPPA || ps.transport)
                 f.summary += " Not defined for a wet mixture: use the F (liquid) or G (vapour) function.";
+            if (ps.transport)
+                f.summary += " Range: 0 to 900 °C (32 to 1652 °F), up to 50 MPa (7252 psia) above 800 °C, "
+                             "the range of the IAPWS transport releases.";
             f.args = {Arg{pair.a->arg, pair.a->q, pair.a->description},
                       Arg{pair.b->arg, pair.b->q, pair.b->description}, units_arg()};
             f.result = ps.q;

@@ -53,7 +53,7 @@ void check_pT(double p, double T) {
         throw RangeError("T", Quantity::Temperature, T, T_min, T_max, "(the range of IAPWS-IF97)");
     if (T > T_25 && p > p_max5)
         throw RangeError("p", Quantity::Pressure, p, none, p_max5,
-                         "above 1073.15 K (800 degC), where IAPWS-IF97 region 5 ends");
+                         "(above 1073.15 K = 800 °C = 1472 °F, where only region 5 of IAPWS-IF97 is defined)");
 }
 
 void check_x(double x) {
