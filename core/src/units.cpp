@@ -545,7 +545,12 @@ std::vector<std::string> tokenize(std::string_view text) {
     std::vector<std::string> raw;
     std::string cur;
     int depth = 0;
-    for (char c : text) {
+    auto digit = [](char d) { return d >= '0' && d <= '9'; };
+    for (std::size_t k = 0; k < text.size(); ++k) {
+        char c = text[k];
+        // A comma between two digits is a decimal comma (patm=0,985bar, as
+        // typed under a locale with a decimal comma), not a separator.
+        if (c == ',' && k > 0 && k + 1 < text.size() && digit(text[k - 1]) && digit(text[k + 1])) c = '.';
         if (c == '(') ++depth;
         if (c == ')' && depth > 0) --depth;
         const bool sep = depth == 0 && (c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == ',' || c == ';');

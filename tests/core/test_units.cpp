@@ -307,6 +307,12 @@ TEST(UnitsGauge, GivenAtmosphere) {
     EXPECT_EQ(code_of([] { u::UnitSpec::parse("US patm=14.2furlong"); }), ErrorCode::UnknownUnit);
     EXPECT_EQ(code_of([] { u::convert(1.0, "psig", "psia", -1.0); }), ErrorCode::InvalidArgument);
     EXPECT_EQ(code_of([] { u::convert(1.0, "psig", "psia", std::nan("")); }), ErrorCode::InvalidArgument);
+    // A decimal comma inside the unit text (typed under a decimal-comma locale)
+    // reads like a decimal point (common practice).
+    EXPECT_EQ(u::UnitSpec::parse("SI p=barg patm=0,985bar").patm_MPa(),
+              u::UnitSpec::parse("SI p=barg patm=0.985bar").patm_MPa());
+    EXPECT_EQ(u::UnitSpec::parse("US,p=psig,patm=14,2psia").patm_MPa(),
+              u::UnitSpec::parse("US p=psig patm=14.2psia").patm_MPa());
 }
 
 // ---------------------------------------------------------------------------
