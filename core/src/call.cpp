@@ -273,7 +273,8 @@ Table call(const Function& f, const std::vector<Table>& args) {
                 continue;
             }
             try {
-                f.eval(a, res);
+                if (f.eval_units) f.eval_units(a, res, spec);
+                else f.eval(a, res);
                 for (std::size_t c = 0; c < width; ++c) {
                     const Quantity q = f.kind == ResultKind::Row ? f.row_quantities[c] : f.result;
                     const double v = res[c];

@@ -16,6 +16,7 @@
 
 #include "isentra/equipment.hpp"
 #include "isentra/error.hpp"
+#include "isentra/units.hpp"
 
 namespace isentra::catalogue::detail {
 
@@ -30,6 +31,13 @@ const char* const cat_performance = "Steam plant performance";
 Arg header_arg() {
     return Arg{"header", Quantity::None,
                "Optional: 1 (or TRUE) puts a row of names and units above the values; default 0", true};
+}
+
+// The barometric pressure (MPa) when the units give pressures as gauge
+// readings, else 0: uncertainties "as a fraction of the reading" then refer to
+// the gauge reading the instrument shows.
+double gauge_patm(const units::UnitSpec& spec) {
+    return spec.is_gauge(Quantity::Pressure) ? spec.patm_MPa() : 0.0;
 }
 
 Function number(const char* name, const char* method, const char* category, std::string summary,
@@ -177,7 +185,8 @@ void add_turbine_expansion(std::vector<Function>& out) {
 void add_section_efficiency(std::vector<Function>& out) {
     const std::string defn =
         " Enthalpy-drop efficiency (h_in - h_out)/(h_in - h_s), h_s = h(p_out, s_in); returned as found, so "
-        "inconsistent readings can give a value above 1.";
+        "inconsistent readings can give a value above 1. An error if the readings show no expansion work "
+        "(h_out not below h_in), a water inlet, or a subcooled outlet.";
     out.push_back(number(
         "STEAM.TURBINE.EFF.PT.PT", "turbineEffPTPT", cat_turbine,
         "Turbine section efficiency from inlet and outlet pressure and temperature readings (superheated "
@@ -206,10 +215,12 @@ void add_section_efficiency(std::vector<Function>& out) {
             p_out(),
             T_arg("T_out", "Outlet temperature (superheated steam)"),
             Arg{"u_p_in", Quantity::None,
-                "Uncertainty of the inlet pressure reading as a fraction of the reading (0.0025 for 0.25 %; at most 0.1)"},
+                "Uncertainty of the inlet pressure reading as a fraction of the reading (0.0025 for 0.25 %; at most "
+                "0.1); of the gauge reading when the units give a gauge pressure (e.g. \"SI p=barg\")"},
             Arg{"u_T_in", Quantity::TemperatureDifference, "Uncertainty of the inlet temperature reading"},
             Arg{"u_p_out", Quantity::None,
-                "Uncertainty of the outlet pressure reading as a fraction of the reading (0.0025 for 0.25 %; at most 0.1)"},
+                "Uncertainty of the outlet pressure reading as a fraction of the reading (0.0025 for 0.25 %; at "
+                "most 0.1); of the gauge reading when the units give a gauge pressure"},
             Arg{"u_T_out", Quantity::TemperatureDifference, "Uncertainty of the outlet temperature reading"}};
     };
     const std::string method =
@@ -219,16 +230,19 @@ void add_section_efficiency(std::vector<Function>& out) {
     out.push_back(number("STEAM.TURBINE.EFF.UNC.PT.PT", "turbineEffUncPTPT", cat_turbine,
                          "Uncertainty of a turbine section efficiency (as in STEAM.TURBINE.EFF.PT.PT) from the "
                          "uncertainties of the inlet and outlet pressure and temperature readings, as a "
-                         "fraction (0.01 = 1 percentage point)." +
+                         "fraction (0.01 = 1 percentage point). Superheated outlets only (the outlet "
+                         "enthalpy of a wet exhaust comes from an energy balance, whose uncertainty this "
+                         "function does not know)." +
                              method,
-                         unc_args(), Quantity::None, [](const double* a, double* o) {
-                             o[0] = eq::section_efficiency_uncertainty(a[0], a[1], a[2], a[3], a[4], a[5], a[6],
-                                                                       a[7])
-                                        .u_eta;
-                         }));
+                         unc_args(), Quantity::None, nullptr));
+    out.back().eval_units = [](const double* a, double* o, const units::UnitSpec& spec) {
+        o[0] = eq::section_efficiency_uncertainty(a[0], a[1], a[2], a[3], a[4], a[5], a[6], a[7], gauge_patm(spec))
+                   .u_eta;
+    };
     out.push_back(row("STEAM.TURBINE.EFF.BUDGET.PT.PT", "turbineEffBudgetPTPT", cat_turbine,
                       "Uncertainty budget of a turbine section efficiency as one row: efficiency, its "
-                      "uncertainty, each reading's contribution |theta_i u_i| (fraction of efficiency) and "
+                      "uncertainty, each reading's contribution |theta_i u_i| (in efficiency units like u_eta: 0.001 = 0.1 "
+                      "percentage point) and "
                       "its share of the total (theta_i u_i)^2/u^2 in % (the shares add up to 100)." +
                           method +
                           " Enter as an array formula over 10 cells; with header = 1 the first row holds the "
@@ -244,16 +258,17 @@ void add_section_efficiency(std::vector<Function>& out) {
                        {"share_T_in", Quantity::Percent},
                        {"share_p_out", Quantity::Percent},
                        {"share_T_out", Quantity::Percent}},
-                      [](const double* a, double* o) {
-                          const eq::EfficiencyUncertainty r =
-                              eq::section_efficiency_uncertainty(a[0], a[1], a[2], a[3], a[4], a[5], a[6], a[7]);
-                          o[0] = r.eta;
-                          o[1] = r.u_eta;
-                          for (int i = 0; i < 4; ++i) {
-                              o[2 + i] = r.contribution[i];
-                              o[6 + i] = r.share[i];
-                          }
-                      }));
+                      nullptr));
+    out.back().eval_units = [](const double* a, double* o, const units::UnitSpec& spec) {
+        const eq::EfficiencyUncertainty r =
+            eq::section_efficiency_uncertainty(a[0], a[1], a[2], a[3], a[4], a[5], a[6], a[7], gauge_patm(spec));
+        o[0] = r.eta;
+        o[1] = r.u_eta;
+        for (int i = 0; i < 4; ++i) {
+            o[2 + i] = r.contribution[i];
+            o[6 + i] = r.share[i];
+        }
+    };
 
     const std::string baumann =
         " Baumann rule (common practice): eta_wet = eta_dry (1 - a y), y = mean moisture ((1 - x_in) + (1 - "
@@ -351,7 +366,8 @@ void add_valve(std::vector<Function>& out) {
         out.push_back(row(("STEAM.VALVE.OUTLET." + code).c_str(), ("valveOutlet" + code).c_str(), cat_equipment,
                           "State after throttling through a valve from " + std::string(v.words) +
                               " to the outlet pressure, as one row: h_out, T_out, s_out, x_out." + defn +
-                              " x below 1 is wet, above 1 superheated. Enter as an array formula over 4 cells; "
+                              " x (equilibrium quality) between 0 and 1 is wet, above 1 superheated, below 0 "
+                              "subcooled liquid. Enter as an array formula over 4 cells; "
                               "with header = 1 the first row holds the names and units.",
                           args(),
                           {{"h_out", Quantity::SpecificEnergy},
@@ -372,8 +388,9 @@ void add_valve(std::vector<Function>& out) {
                              [fn](const double* a, double* o) { o[0] = fn(a[0], a[1], a[2]).T_out; }));
         out.push_back(number(("STEAM.VALVE.XOUT." + code).c_str(), ("valveXout" + code).c_str(), cat_equipment,
                              "Vapour quality after throttling through a valve from " + std::string(v.words) +
-                                 " to the outlet pressure: below 1 wet, above 1 (equilibrium quality) "
-                                 "superheated." + defn,
+                                 " to the outlet pressure (equilibrium quality): between 0 and 1 wet, above 1 "
+                                 "superheated, below 0 subcooled liquid (a liquid inlet that does not flash); an "
+                                 "error at or above the critical pressure." + defn,
                              args(), Quantity::None, [fn](const double* a, double* o) {
                                  const double x = fn(a[0], a[1], a[2]).x_out;
                                  if (x != x)
@@ -410,7 +427,8 @@ void add_mixing(std::vector<Function>& out) {
     out.push_back(row("STEAM.MIX.OUTLET", "mixOutlet", cat_equipment,
                       "Mixed stream after adiabatic mixing of two streams, at pressure p, as one row: m, h, T, s, x." +
                           defn +
-                          " x below 1 is wet, above 1 superheated. Enter as an array formula over 5 cells; with "
+                          " x (equilibrium quality) between 0 and 1 is wet, above 1 superheated, below 0 "
+                          "subcooled liquid. Enter as an array formula over 5 cells; with "
                           "header = 1 the first row holds the names and units.",
                       with_p(),
                       {{"m", Quantity::MassFlow},
@@ -446,18 +464,21 @@ void add_fwh(std::vector<Function>& out) {
     out.push_back(number(
         "STEAM.FWH.TTD", "fwhTTD", cat_equipment,
         "Terminal temperature difference of a closed feedwater heater, TTD = Tsat(p_shell) - T_fw_out (ASME "
-        "PTC 12.1), p_shell the extraction steam pressure at the heater inlet.",
+        "PTC 12.1), p_shell the extraction steam pressure at the heater inlet. Negative when the feedwater "
+        "leaves hotter than Tsat (heaters with a desuperheating zone, typically a few K).",
         {p_arg("p_shell", "Heater shell pressure (extraction steam pressure at the heater inlet)"),
          T_arg("T_fw_out", "Feedwater outlet temperature")},
         Quantity::TemperatureDifference, [](const double* a, double* o) { o[0] = eq::fwh_ttd(a[0], a[1]); }));
     out.push_back(number("STEAM.FWH.DCA", "fwhDCA", cat_equipment,
                          "Drain cooler approach of a closed feedwater heater, DCA = T_drain - T_fw_in (ASME PTC "
-                         "12.1): drain outlet temperature minus feedwater inlet temperature.",
+                         "12.1): drain outlet temperature minus feedwater inlet temperature. An error if the "
+                         "drain is colder than the feedwater inlet.",
                          {T_arg("T_drain", "Drain outlet temperature"), T_arg("T_fw_in", "Feedwater inlet temperature")},
                          Quantity::TemperatureDifference,
                          [](const double* a, double* o) { o[0] = eq::fwh_dca(a[0], a[1]); }));
     out.push_back(number("STEAM.FWH.RISE", "fwhRise", cat_equipment,
-                         "Feedwater temperature rise through a heater, T_fw_out - T_fw_in.",
+                         "Feedwater temperature rise through a heater, T_fw_out - T_fw_in (an error if "
+                         "negative).",
                          {T_arg("T_fw_in", "Feedwater inlet temperature"),
                           T_arg("T_fw_out", "Feedwater outlet temperature")},
                          Quantity::TemperatureDifference,
@@ -492,7 +513,8 @@ void add_heat_rate(std::vector<Function>& out) {
     const std::string heat = "heat added to the cycle Q = m_ms (h_ms - h_fw) + m_rh (h_hrh - h_crh)";
     out.push_back(number("STEAM.HEATRATE.CYCLE", "heatRateCycle", cat_performance,
                          "Turbine cycle heat rate Q / P_gen, with the " + heat +
-                             ". Enthalpies from e.g. STEAM.H.PT.",
+                             ". Enthalpies from e.g. STEAM.H.PT. An error below 3600 kJ/kWh (3412.14 "
+                             "Btu/kWh), which would mean more than 100 % efficiency.",
                          cycle_args(), Quantity::HeatRate, [](const double* a, double* o) {
                              o[0] = eq::cycle_heat_rate(a[0], a[1], a[2], a[3], a[4], a[5], a[6]);
                          }));

@@ -26,6 +26,7 @@ constexpr double p_wet_min = 611.213e-6;  // MPa, psat(273.15 K): below it IF97 
 
 std::string num(double v) {
     char buf[40];
+    if (v == 0) v = 0;  // no "-0"
     std::snprintf(buf, sizeof buf, "%.6g", v);
     return buf;
 }
@@ -160,6 +161,47 @@ void check_expansion_pressures(double p_in, double p_out, bool strict) {
                                 : "(the inlet pressure p_in: a turbine expands the steam to a lower pressure)");
 }
 
+// A turbine inlet given by (p,h): steam (wet, saturated, superheated or
+// supercritical), not subcooled or compressed water.
+State steam_ph(double p, double h) {
+    const State in = ph(p, h, Names{"p_in", "T_in", "h_in", "s_in"});
+    if (in.phase == Phase::Liquid) {
+        const bool sub = p < pc;
+        throw RangeError("h_in", Quantity::SpecificEnergy, h,
+                         sub ? saturation_p(p).liq.h : state_pT(p, Tc).h, none,
+                         sub ? "(the saturated-liquid enthalpy at p_in: below it the inlet is subcooled water, "
+                               "not steam)"
+                             : "(the enthalpy at p_in and the critical temperature: below it, above the critical "
+                               "pressure, the inlet is compressed water, not steam)",
+                         ErrorCode::Impossible);
+    }
+    return in;
+}
+
+// The outlet of a measured expansion (p_out, h_out): below the inlet enthalpy
+// (the section does work) and not subcooled or compressed water.
+void check_outlet(const State& in, double p_out, double h_out) {
+    if (!(h_out < in.h))
+        throw RangeError("h_out", Quantity::SpecificEnergy, h_out, none, in.h,
+                         "(the inlet enthalpy: the readings show no expansion work, so there is no efficiency)",
+                         ErrorCode::Impossible);
+    const State out = ph(p_out, h_out, Names{"p_out", "T_out", "h_out", "s_out"});
+    if (out.phase == Phase::Liquid)
+        throw RangeError("h_out", Quantity::SpecificEnergy, h_out,
+                         p_out < pc ? saturation_p(p_out).liq.h : state_pT(p_out, Tc).h, none,
+                         "(below it the outlet would be subcooled or compressed water, which no turbine section "
+                         "delivers; check the readings)",
+                         ErrorCode::Impossible);
+}
+
+// A (p,T) outlet reading at or above the inlet enthalpy.
+[[noreturn]] void no_work(const State& in, double p_out, double T_out) {
+    throw RangeError("T_out", Quantity::Temperature, T_out, none, state_ph(p_out, in.h).T,
+                     "(the temperature at p_out with the inlet enthalpy: the readings show no expansion work, "
+                     "so there is no efficiency)",
+                     ErrorCode::Impossible);
+}
+
 const Names in_pT{"p_in", "T_in", "h_in", "s_in"};
 const Names in_ph{"p_in", "T_in", "h_in", "s_in"};
 const Names out_names{"p_out", "T_out", "h_out", "s_in (isentropic end point at p_out)"};
@@ -209,7 +251,7 @@ Expansion turbine_expansion_pT(double p_in, double T_in, double p_out, double et
 
 Expansion turbine_expansion_ph(double p_in, double h_in, double p_out, double eta) {
     check_eta("eta", eta, true, "the isentropic efficiency");
-    const State in = ph(p_in, h_in, in_ph);
+    const State in = steam_ph(p_in, h_in);
     check_expansion_pressures(p_in, p_out, false);
     return expand(in, p_out, eta);
 }
@@ -221,6 +263,7 @@ double section_efficiency_pT_pT(double p_in, double T_in, double p_out, double T
     const State out = steam_pT(p_out, T_out, out_names, "outlet",
                                "use the section-efficiency function from the outlet enthalpy (from an energy "
                                "balance) instead, STEAM.TURBINE.EFF.PT.PH");
+    if (!(out.h < in.h)) no_work(in, p_out, T_out);
     return efficiency(in, p_out, out.h);
 }
 
@@ -229,21 +272,21 @@ double section_efficiency_pT_ph(double p_in, double T_in, double p_out, double h
                               "give the inlet enthalpy and use STEAM.TURBINE.EFF.PH.PH instead");
     check_expansion_pressures(p_in, p_out, true);
     check_finite("h_out", Quantity::SpecificEnergy, h_out);
-    ph(p_out, h_out, out_names);  // the outlet must be a state of IF97
+    check_outlet(in, p_out, h_out);
     return efficiency(in, p_out, h_out);
 }
 
 double section_efficiency_ph_ph(double p_in, double h_in, double p_out, double h_out) {
-    const State in = ph(p_in, h_in, in_ph);
+    const State in = steam_ph(p_in, h_in);
     check_expansion_pressures(p_in, p_out, true);
     check_finite("h_out", Quantity::SpecificEnergy, h_out);
-    ph(p_out, h_out, out_names);
+    check_outlet(in, p_out, h_out);
     return efficiency(in, p_out, h_out);
 }
 
 EfficiencyUncertainty section_efficiency_uncertainty(double p_in, double T_in, double p_out, double T_out,
                                                      double u_p_in_rel, double u_T_in, double u_p_out_rel,
-                                                     double u_T_out) {
+                                                     double u_T_out, double patm_gauge) {
     auto check_rel = [](const char* name, double u) {
         check_finite(name, Quantity::None, u);
         if (u < 0 || u > 0.1)
@@ -262,6 +305,7 @@ EfficiencyUncertainty section_efficiency_uncertainty(double p_in, double T_in, d
     const State out = steam_pT(p_out, T_out, out_names, "outlet",
                                "use the section-efficiency function from the outlet enthalpy (from an energy "
                                "balance) instead, STEAM.TURBINE.EFF.PT.PH");
+    if (!(out.h < in.h)) no_work(in, p_out, T_out);
     const State iso = ps(p_out, in.s, out_names);
 
     EfficiencyUncertainty r;
@@ -280,7 +324,11 @@ EfficiencyUncertainty section_efficiency_uncertainty(double p_in, double T_in, d
     r.theta[1] = e1 * dh1_dT + e2s * dh2s_ds1 * ds1_dT;
     r.theta[2] = e2 * dh2_dp + e2s * dh2s_dp2;
     r.theta[3] = e2 * dh2_dT;
-    const double u[4] = {u_p_in_rel * p_in, u_T_in, u_p_out_rel * p_out, u_T_out};
+    // The pressure uncertainties: fractions of the readings as the instruments
+    // show them (gauge readings when patm_gauge > 0; a vacuum reading counts by
+    // its magnitude).
+    const double u[4] = {u_p_in_rel * std::fabs(p_in - patm_gauge), u_T_in,
+                         u_p_out_rel * std::fabs(p_out - patm_gauge), u_T_out};
     double sum = 0;
     for (int i = 0; i < 4; ++i) {
         r.contribution[i] = std::fabs(r.theta[i] * u[i]);
@@ -288,7 +336,7 @@ EfficiencyUncertainty section_efficiency_uncertainty(double p_in, double T_in, d
     }
     r.u_eta = std::sqrt(sum);
     for (int i = 0; i < 4; ++i)
-        r.share[i] = sum > 0 ? 100.0 * r.contribution[i] * r.contribution[i] / sum : nan_v;
+        r.share[i] = sum > 0 ? 100.0 * r.contribution[i] * r.contribution[i] / sum : 0.0;  // all 0 if u = 0
     return r;
 }
 
@@ -341,7 +389,7 @@ Pumping pump_pT(double p_in, double T_in, double p_out, double eta) {
         const bool sub = p_in < pc;
         const double limit = sub ? if97::tsat(p_in) : Tc;
         return RangeError("T_in", Quantity::Temperature, T_in, nan_v, limit,
-                          sub ? "(the saturation temperature at p_in, or at it: a pump takes subcooled water)"
+                          sub ? "(the saturation temperature at p_in: a pump takes subcooled water, colder than that)"
                               : "(the critical temperature: above it the fluid at p_in is supercritical, "
                                 "not water)",
                           ErrorCode::Impossible);
@@ -444,6 +492,12 @@ double desuperheater_spray(double m_steam, double p_steam, double T_steam, doubl
         throw RangeError("T_out", Quantity::Temperature, T_out, none, T_steam,
                          "(the steam temperature T_steam: spray water can only cool the steam)");
     const State out = pT(p_steam, T_out, Names{"p_steam", "T_out", "h_out", "s_out"});
+    check_finite("p_water", Quantity::Pressure, p_water);
+    if (p_water < p_steam)
+        throw RangeError("p_water", Quantity::Pressure, p_water, p_steam, none,
+                         "(the steam pressure p_steam: spray water must be supplied above the steam pressure to "
+                         "enter the steam)",
+                         ErrorCode::Impossible);
     const State water = pT(p_water, T_water, Names{"p_water", "T_water", "h_water", "s_water"});
     if (water.phase != Phase::Liquid)
         throw RangeError("T_water", Quantity::Temperature, T_water, nan_v,
@@ -473,12 +527,22 @@ double fwh_ttd(double p_shell, double T_fw_out) {
 double fwh_dca(double T_drain, double T_fw_in) {
     check_T("T_drain", T_drain);
     check_T("T_fw_in", T_fw_in);
+    if (T_drain < T_fw_in)
+        throw RangeError("T_drain", Quantity::Temperature, T_drain, T_fw_in, none,
+                         "(the feedwater inlet temperature T_fw_in: the drain cannot leave colder than the "
+                         "coldest water it meets; check the readings)",
+                         ErrorCode::Impossible);
     return T_drain - T_fw_in;
 }
 
 double fwh_rise(double T_fw_in, double T_fw_out) {
     check_T("T_fw_in", T_fw_in);
     check_T("T_fw_out", T_fw_out);
+    if (T_fw_out < T_fw_in)
+        throw RangeError("T_fw_out", Quantity::Temperature, T_fw_out, T_fw_in, none,
+                         "(the feedwater inlet temperature T_fw_in: a heater does not cool the feedwater; check "
+                         "the readings)",
+                         ErrorCode::Impossible);
     return T_fw_out - T_fw_in;
 }
 
@@ -491,6 +555,15 @@ double fwh_extraction_flow(double m_fw, double h_fw_in, double h_fw_out, double 
     check_finite("h_drain", Quantity::SpecificEnergy, h_drain);
     check_nonneg("m_casc", Quantity::MassFlow, m_casc, "(a mass flow cannot be negative; 0 without cascading drains)");
     check_finite("h_casc", Quantity::SpecificEnergy, h_casc);
+    if (h_fw_out < h_fw_in)
+        throw RangeError("h_fw_out", Quantity::SpecificEnergy, h_fw_out, h_fw_in, none,
+                         "(the feedwater inlet enthalpy h_fw_in: a heater does not cool the feedwater)",
+                         ErrorCode::Impossible);
+    if (h_drain < h_fw_in)
+        throw RangeError("h_drain", Quantity::SpecificEnergy, h_drain, h_fw_in, none,
+                         "(the feedwater inlet enthalpy h_fw_in: the drain cannot leave colder than the coldest "
+                         "water it meets)",
+                         ErrorCode::Impossible);
     if (!(h_ext > h_drain))
         throw RangeError("h_ext", Quantity::SpecificEnergy, h_ext, h_drain, none,
                          "(the drain enthalpy h_drain: the extraction steam must bring more enthalpy than the "
@@ -507,6 +580,20 @@ double fwh_extraction_flow(double m_fw, double h_fw_in, double h_fw_out, double 
 
 // ---- Heat rate ----------------------------------------------------------------------
 
+namespace {
+// A heat rate below 3600 kJ/kWh (1 kWh of heat per kWh of electricity) would
+// mean more than 100 % efficiency (first law; 3600 kJ/kWh = 3412.14 Btu/kWh).
+double checked_heat_rate(double hr) {
+    if (hr < 3600.0)
+        throw Error(ErrorCode::Impossible,
+                    "the heat rate comes out at " + num(hr) + " kJ/kWh (" + num(hr / 1.05505585262) +
+                        " Btu/kWh), below 3600 kJ/kWh (3412.14 Btu/kWh), which would mean more than 100 % "
+                        "efficiency: the output is larger than the heat added; check the flows, enthalpies and "
+                        "output");
+    return hr;
+}
+}  // namespace
+
 double cycle_heat_input(double m_ms, double h_ms, double h_fw, double m_rh, double h_hrh, double h_crh) {
     check_nonneg("m_ms", Quantity::MassFlow, m_ms, "(a mass flow cannot be negative)");
     check_finite("h_ms", Quantity::SpecificEnergy, h_ms);
@@ -514,6 +601,9 @@ double cycle_heat_input(double m_ms, double h_ms, double h_fw, double m_rh, doub
     check_nonneg("m_rh", Quantity::MassFlow, m_rh, "(a mass flow cannot be negative; 0 for a unit without reheat)");
     check_finite("h_hrh", Quantity::SpecificEnergy, h_hrh);
     check_finite("h_crh", Quantity::SpecificEnergy, h_crh);
+    if (m_rh > 0 && h_hrh < h_crh)
+        throw RangeError("h_hrh", Quantity::SpecificEnergy, h_hrh, h_crh, none,
+                         "(the cold reheat enthalpy h_crh: a reheater adds heat)", ErrorCode::Impossible);
     const double q = m_ms * (h_ms - h_fw) + m_rh * (h_hrh - h_crh);
     if (!(q > 0))
         throw Error(ErrorCode::Impossible,
@@ -527,7 +617,7 @@ double cycle_heat_rate(double m_ms, double h_ms, double h_fw, double m_rh, doubl
     const double q = cycle_heat_input(m_ms, h_ms, h_fw, m_rh, h_hrh, h_crh);
     check_finite("P_gen", Quantity::Power, P_gen);
     if (!(P_gen > 0)) throw RangeError("P_gen", Quantity::Power, P_gen, 0.0, none, "(the generator output must be positive)");
-    return 3600.0 * q / P_gen;
+    return checked_heat_rate(3600.0 * q / P_gen);
 }
 
 double net_heat_rate(double m_ms, double h_ms, double h_fw, double m_rh, double h_hrh, double h_crh,
@@ -540,7 +630,7 @@ double net_heat_rate(double m_ms, double h_ms, double h_fw, double m_rh, double 
         throw RangeError("P_aux", Quantity::Power, P_aux, 0.0, P_gen,
                          "(the generator output P_gen: the net output P_gen - P_aux must be positive)");
     check_eta("eta_boiler", eta_boiler, false, "the boiler efficiency");
-    return 3600.0 * q / eta_boiler / (P_gen - P_aux);
+    return checked_heat_rate(3600.0 * q / eta_boiler / (P_gen - P_aux));
 }
 
 }  // namespace isentra::equipment

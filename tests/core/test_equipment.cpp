@@ -659,7 +659,7 @@ TEST(EquipmentCatalogue, NamesMethodsAndArguments) {
         if (!ours) continue;
         ++count;
         EXPECT_FALSE(f.summary.empty()) << f.name;
-        ASSERT_TRUE(static_cast<bool>(f.eval)) << f.name;
+        ASSERT_TRUE(static_cast<bool>(f.eval) || static_cast<bool>(f.eval_units)) << f.name;
         for (const auto& a : f.args) EXPECT_FALSE(a.description.empty()) << f.name << " " << a.name;
         if (f.kind == catalogue::ResultKind::Row) {
             ASSERT_GE(f.args.size(), 2u);
@@ -689,4 +689,92 @@ TEST(EquipmentCall, RowFunctionsInUSUnits) {
     ASSERT_EQ(t.cols, 7u);
     EXPECT_NEAR(t.at(0, 0).number, units::convert(e.h_out, "kJ/kg", "Btu/lbm"), 1e-8);
     EXPECT_NEAR(t.at(0, 1).number, units::convert(e.T_out, "K", "degF"), 1e-8);
+}
+
+// ============================================================================
+// Readings no equipment can produce: clear errors, not numbers. Found by an
+// independent re-implementation of every equipment function (2026-12-02).
+// ============================================================================
+
+namespace {
+ErrorCode code_of_call(const char* name, std::vector<double> args, const char* units = nullptr) {
+    const Value v = call_num(name, std::move(args), units);
+    EXPECT_EQ(v.kind, Value::Kind::Error) << name << " gave " << v.number;
+    return v.error;
+}
+bool says(const char* name, std::vector<double> args, const std::string& part, const char* units = nullptr) {
+    const Value v = call_num(name, std::move(args), units);
+    return v.kind == Value::Kind::Error && v.text.find(part) != std::string::npos;
+}
+}  // namespace
+
+TEST(EquipmentImpossible, TurbineReadings) {
+    // Outlet hotter than the inlet (no expansion work): common practice, not an efficiency.
+    EXPECT_EQ(code_of_call("STEAM.TURBINE.EFF.PT.PT", {10, 500, 1, 500}), ErrorCode::Impossible);
+    EXPECT_TRUE(says("STEAM.TURBINE.EFF.PT.PT", {10, 500, 1, 500}, "no expansion work"));
+    EXPECT_EQ(code_of_call("STEAM.TURBINE.EFF.UNC.PT.PT", {10, 500, 1, 500, 0.001, 0.5, 0.001, 0.5}),
+              ErrorCode::Impossible);
+    EXPECT_EQ(code_of_call("STEAM.TURBINE.EFF.PT.PH", {10, 500, 1, 3400}), ErrorCode::Impossible);
+    // A subcooled outlet (24 degC water at 1 MPa) and a water inlet (500 kJ/kg at 1 MPa).
+    EXPECT_TRUE(says("STEAM.TURBINE.EFF.PT.PH", {10, 500, 1, 100}, "subcooled"));
+    EXPECT_TRUE(says("STEAM.TURBINE.EFF.PH.PH", {1, 500, 0.1, 400}, "subcooled water, not steam"));
+    EXPECT_TRUE(says("STEAM.TURBINE.HOUT.PH", {1, 500, 0.1, 0.85}, "subcooled water, not steam"));
+    // Compressed water above the critical pressure (30 MPa, 1500 kJ/kg, about 340 degC).
+    EXPECT_TRUE(says("STEAM.TURBINE.HOUT.PH", {30, 1500, 5, 0.85}, "compressed water"));
+    // A wet inlet stays allowed (x = 0.95 at 1 MPa).
+    const State wet = state_px(1.0, 0.95);
+    EXPECT_EQ(call_num("STEAM.TURBINE.HOUT.PH", {1.0, wet.h, 0.1, 0.85}).kind, Value::Kind::Number);
+    // Efficiencies above 1 from inconsistent but possible readings are still returned.
+    const eq::Expansion e = eq::turbine_expansion_pT(10.0, 773.15, 1.0, 1.0);
+    EXPECT_GT(num(call_num("STEAM.TURBINE.EFF.PT.PH", {10, 500, 1, e.h_out - 5})), 1.0);
+}
+
+TEST(EquipmentImpossible, HeatersSprayAndHeatRate) {
+    EXPECT_TRUE(says("STEAM.FWH.DCA", {100, 110}, "drain cannot leave colder"));
+    EXPECT_TRUE(says("STEAM.FWH.RISE", {100, 90}, "does not cool"));
+    EXPECT_EQ(code_of_call("STEAM.FWH.EXTRACTION", {100, 400, 600, 3000, 350, 0, 0}), ErrorCode::Impossible);
+    EXPECT_EQ(code_of_call("STEAM.FWH.EXTRACTION", {100, 600, 400, 3000, 450, 0, 0}), ErrorCode::Impossible);
+    EXPECT_NEAR(num(call_num("STEAM.FWH.DCA", {110, 110})), 0.0, 0.0);  // zero approach is allowed
+    // Spray water below the steam pressure cannot enter it.
+    EXPECT_TRUE(says("STEAM.DESUPERHEATER.SPRAY", {100, 10, 500, 400, 8, 150}, "above the steam pressure"));
+    EXPECT_EQ(call_num("STEAM.DESUPERHEATER.SPRAY", {100, 10, 500, 400, 12, 150}).kind, Value::Kind::Number);
+    // Heat rate below 3600 kJ/kWh = more than 100 % efficiency (first law; 3600 kJ = 1 kWh exactly).
+    EXPECT_TRUE(says("STEAM.HEATRATE.CYCLE", {300, 3400, 1200, 250, 3600, 3050, 3000000}, "100 % efficiency"));
+    EXPECT_TRUE(says("STEAM.HEATRATE.NET", {300, 3400, 1200, 250, 3600, 3050, 3000000, 1000, 0.9}, "100 %"));
+    // A reheater that removes heat.
+    EXPECT_TRUE(says("STEAM.HEATRATE.CYCLE", {300, 3400, 1200, 250, 3050, 3600, 300000}, "a reheater adds heat"));
+    // Without reheat the reheat enthalpies do not matter.
+    EXPECT_EQ(call_num("STEAM.HEATRATE.CYCLE", {300, 3400, 1200, 0, 3050, 3600, 300000}).kind,
+              Value::Kind::Number);
+}
+
+TEST(EquipmentUncertainty, GaugeReadingsTakeTheirFractionOfTheGaugeValue) {
+    // 0.01 of a 0.5 barg outlet reading is 0.005 bar, not 0.01 of 1.51325 bar(a): the same
+    // result as an absolute-unit call with that absolute uncertainty (from the definition).
+    const double p_out_abs = 0.05 + 0.101325;  // MPa
+    const double g = num(call_num("STEAM.TURBINE.EFF.UNC.PT.PT", {100, 500, 0.5, 200, 0, 0, 0.01, 0}, "SI p=barg"));
+    const double a = num(call_num("STEAM.TURBINE.EFF.UNC.PT.PT",
+                                  {10.101325, 500, p_out_abs, 200, 0, 0, 0.01 * 0.05 / p_out_abs, 0}));
+    EXPECT_NEAR(g, a, 1e-15);
+    // Every uncertainty zero: zero uncertainty and zero shares, not an error.
+    const auto f = fn("STEAM.TURBINE.EFF.BUDGET.PT.PT");
+    std::vector<Table> args;
+    for (double d : {10.0, 500.0, 1.0, 250.0, 0.0, 0.0, 0.0, 0.0}) args.push_back(Table::scalar(Value::of(d)));
+    const Table t = call(f, args);
+    for (std::size_t c = 1; c < t.cols; ++c) {
+        EXPECT_EQ(t.at(0, c).kind, Value::Kind::Number) << c;
+        EXPECT_EQ(t.at(0, c).number, 0.0) << c;
+    }
+}
+
+TEST(EquipmentMessages, LimitsPrintWithEnoughDigits) {
+    // 310.999 degC at 10 MPa is just below Tsat = 310.9995 degC (R7-97(2012) Eq. 31):
+    // the sentence must not say "310.999 is below the minimum 310.999".
+    const Value v = call_num("STEAM.TURBINE.HOUT.PT", {10, 310.999, 1, 0.85});
+    ASSERT_EQ(v.kind, Value::Kind::Error);
+    EXPECT_NE(v.text.find("310.999 °C is below the minimum 310.9995"), std::string::npos) << v.text;
+    // No "-0" in a sentence.
+    const Value z = call_num("STEAM.FWH.EXTRACTION", {10, 700, 710, 2900, 720, 50, 900});
+    ASSERT_EQ(z.kind, Value::Kind::Error);
+    EXPECT_EQ(z.text.find("-0 "), std::string::npos) << z.text;
 }

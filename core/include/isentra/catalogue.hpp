@@ -17,6 +17,10 @@
 
 #include "isentra/quantity.hpp"
 
+namespace isentra::units {
+class UnitSpec;
+}
+
 namespace isentra::catalogue {
 
 struct Arg {
@@ -42,6 +46,9 @@ struct Function;
 // arguments are not included), `out` receives the result(s) in core units.
 // For ResultKind::Number, out[0]; for Row, out[0..row_len). Throws isentra::Error.
 using Eval = std::function<void(const double* a, double* out)>;
+// The same for the few functions whose meaning depends on the units given
+// (e.g. an uncertainty as a fraction of a gauge reading).
+using EvalUnits = std::function<void(const double* a, double* out, const units::UnitSpec& spec)>;
 
 struct Function {
     std::string name;      // display name, e.g. "STEAM.H.PT"
@@ -52,6 +59,7 @@ struct Function {
     Quantity result = Quantity::None;
     ResultKind kind = ResultKind::Number;
     Eval eval;
+    EvalUnits eval_units;  // if set, called instead of eval
     // Row results: the column names and their quantities.
     std::vector<std::string> row_names;
     std::vector<Quantity> row_quantities;

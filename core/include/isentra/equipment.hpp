@@ -72,9 +72,12 @@ struct EfficiencyUncertainty {
     double contribution[4] = {0, 0, 0, 0};  // |theta_i u_i| (fraction of efficiency)
     double share[4] = {0, 0, 0, 0};         // (theta_i u_i)^2 / u_eta^2 * 100, in %; sums to 100
 };
+// u_p_in_rel and u_p_out_rel are fractions of the pressure readings; for
+// gauge instruments give the barometric pressure as patm_gauge (MPa) and the
+// fractions apply to the gauge readings p - patm_gauge (0: absolute readings).
 EfficiencyUncertainty section_efficiency_uncertainty(double p_in, double T_in, double p_out, double T_out,
                                                      double u_p_in_rel, double u_T_in, double u_p_out_rel,
-                                                     double u_T_out);
+                                                     double u_T_out, double patm_gauge = 0.0);
 
 // ---- Wet-stage correction (Baumann rule, common practice) -----------------
 
