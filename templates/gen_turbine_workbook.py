@@ -21,10 +21,13 @@ Harrow Fen Power Station is a made-up plant; the readings are invented.
 """
 import os
 import sys
-import zipfile
-from xml.sax.saxutils import escape, quoteattr
 
-ADDIN = "ORG.ISENTRA.STEAMFUNCTIONS."
+sys.dont_write_bytecode = True  # keep templates/ free of __pycache__
+from odf_writer import (ADDIN, MIME_ODS, MIME_OTS, NS, COMMON_STYLES, CELL_STYLES, col_name, col_index,  # noqa: E402
+                        c_text, c_num, c_formula, c_empty, c_blank, row, grid_rows, table_style, column_style,
+                        content_xml as document_content, styles_xml, meta_xml, write_package)
+from xml.sax.saxutils import quoteattr  # noqa: E402
+
 TEST = "Test"          # first sheet: inputs, readings, results, chart
 DATA = "ChartData"     # hidden helper sheet: state points and chart series
 UNITS = "[$Test.$B$5]"  # the units cell, as seen from the helper sheet
@@ -72,49 +75,6 @@ ISO_N = 21
 ISO_COL0 = 26  # column Z: first isobar's s column (then h, then the next isobar)
 
 
-def col_name(i):  # 1-based
-    s = ""
-    while i:
-        i, r = divmod(i - 1, 26)
-        s = chr(65 + r) + s
-    return s
-
-
-def col_index(name):
-    i = 0
-    for ch in name:
-        i = i * 26 + ord(ch) - 64
-    return i
-
-
-# ---------------------------------------------------------------- cells
-def c_text(s, style=None):
-    st = f' table:style-name="{style}"' if style else ""
-    return f'<table:table-cell{st} office:value-type="string"><text:p>{escape(s)}</text:p></table:table-cell>'
-
-
-def c_num(v, style=None):
-    st = f' table:style-name="{style}"' if style else ""
-    return f'<table:table-cell{st} office:value-type="float" office:value="{v!r}"><text:p>{v}</text:p></table:table-cell>'
-
-
-def c_formula(f, style=None, string=False):
-    st = f' table:style-name="{style}"' if style else ""
-    vt = ' office:value-type="string"' if string else ""
-    return f'<table:table-cell{st} table:formula={quoteattr("of:=" + f)}{vt}/>'
-
-
-def c_empty(n=1):
-    if n == 1:
-        return "<table:table-cell/>"
-    return f'<table:table-cell table:number-columns-repeated="{n}"/>'
-
-
-def row(cells, style=None):
-    st = f' table:style-name="{style}"' if style else ""
-    return f"<table:table-row{st}>" + "".join(cells) + "</table:table-row>"
-
-
 def p_unit():
     return f'IF(UPPER({UNITS})="US";"psia";"MPa")'
 
@@ -160,7 +120,7 @@ def test_sheet(readings, chart_cell_xml):
             r = readings[i]
             cells = [c_text(r[0], "label"), c_num(r[1], "input")] + [c_num(v, "input") for v in r[2:]]
         else:
-            cells = [c_text(f"T{i + 1}", "label")] + [c_empty(1).replace("<table:table-cell", '<table:table-cell table:style-name="input"')] * 13
+            cells = [c_text(f"T{i + 1}", "label")] + [c_blank("input")] * 13
         rows.append(row(cells))
     rows.append(row([c_empty()]))
     rows.append(row([c_text("Results: enthalpy-drop efficiency (h_in - h_out)/(h_in - h_s), h_s at the exhaust pressure and the inlet entropy", "subtitle")]))
@@ -253,20 +213,7 @@ def data_sheet():
             frac = -0.045 + 0.09 * n / (ISO_N - 1)
             put(r, cs, c_formula(f"{centre}*(1+({frac!r}))"))
             put(r, ch, c_formula(f"IF(ISNUMBER([.{cs}{r}]);{ADDIN}HPS({pref};[.{cs}{r}];{UNITS});NA())"))
-    ncols = ISO_COL0 + 2 * len(ISOBARS) - 1
-    rows = []
-    for r in range(1, nrows + 1):
-        cells, gap = [], 0
-        for c in range(1, ncols + 1):
-            x = grid.get((r, c))
-            if x is None:
-                gap += 1
-                continue
-            if gap:
-                cells.append(c_empty(gap))
-                gap = 0
-            cells.append(x)
-        rows.append(row(cells))
+    rows = grid_rows(grid, nrows, ISO_COL0 + 2 * len(ISOBARS) - 1)
     return f'<table:table table:name="{DATA}" table:style-name="ta_hidden">' + "".join(rows) + "</table:table>"
 
 
@@ -287,22 +234,6 @@ def series_list():
 
 
 # ---------------------------------------------------------------- chart object
-NS = ('xmlns:office="urn:oasis:names:tc:opendocument:xmlns:office:1.0" '
-      'xmlns:style="urn:oasis:names:tc:opendocument:xmlns:style:1.0" '
-      'xmlns:text="urn:oasis:names:tc:opendocument:xmlns:text:1.0" '
-      'xmlns:table="urn:oasis:names:tc:opendocument:xmlns:table:1.0" '
-      'xmlns:draw="urn:oasis:names:tc:opendocument:xmlns:drawing:1.0" '
-      'xmlns:fo="urn:oasis:names:tc:opendocument:xmlns:xsl-fo-compatible:1.0" '
-      'xmlns:xlink="http://www.w3.org/1999/xlink" '
-      'xmlns:dc="http://purl.org/dc/elements/1.1/" '
-      'xmlns:meta="urn:oasis:names:tc:opendocument:xmlns:meta:1.0" '
-      'xmlns:number="urn:oasis:names:tc:opendocument:xmlns:datastyle:1.0" '
-      'xmlns:svg="urn:oasis:names:tc:opendocument:xmlns:svg-compatible:1.0" '
-      'xmlns:chart="urn:oasis:names:tc:opendocument:xmlns:chart:1.0" '
-      'xmlns:of="urn:oasis:names:tc:opendocument:xmlns:of:1.2" '
-      'xmlns:loext="urn:org:documentfoundation:names:experimental:office:xmlns:loext:1.0" '
-      'office:version="1.3"')
-
 SERIES_LOOK = {  # colour, width, dash, symbol
     "sat": ("#000000", "0.06cm", False, False),
     "iso0": ("#7f7f7f", "0.03cm", True, False),
@@ -376,86 +307,20 @@ def chart_frame():
 
 # ---------------------------------------------------------------- document
 def content_xml(readings):
-    auto = """
-  <number:number-style style:name="Nf"><number:number number:decimal-places="4" number:min-decimal-places="0" number:min-integer-digits="1"/></number:number-style>
-  <number:percentage-style style:name="Np"><number:number number:decimal-places="2" number:min-decimal-places="2" number:min-integer-digits="1"/><number:text>%</number:text></number:percentage-style>
-  <number:percentage-style style:name="Npd"><number:text>+</number:text><number:number number:decimal-places="2" number:min-decimal-places="2" number:min-integer-digits="1"/><number:text>%</number:text></number:percentage-style>
-  <number:percentage-style style:name="Npd-neg"><number:text>-</number:text><number:number number:decimal-places="2" number:min-decimal-places="2" number:min-integer-digits="1"/><number:text>%</number:text>
-   <style:map style:condition="value()&gt;=0" style:apply-style-name="Npd"/></number:percentage-style>
-  <style:style style:name="ta_test" style:family="table" style:master-page-name="Report"><style:table-properties table:display="true"/></style:style>
-  <style:style style:name="ta_hidden" style:family="table" style:master-page-name="Report"><style:table-properties table:display="false"/></style:style>
-  <style:style style:name="coA" style:family="table-column"><style:table-column-properties style:column-width="5.6cm"/></style:style>
-  <style:style style:name="coB" style:family="table-column"><style:table-column-properties style:column-width="2.0cm"/></style:style>
-  <style:style style:name="coC" style:family="table-column"><style:table-column-properties style:column-width="2.45cm"/></style:style>
-  <style:style style:name="title" style:family="table-cell"><style:text-properties fo:font-weight="bold" fo:font-size="13pt"/></style:style>
-  <style:style style:name="subtitle" style:family="table-cell"><style:text-properties fo:font-weight="bold"/></style:style>
-  <style:style style:name="caution" style:family="table-cell"><style:text-properties fo:font-weight="bold" fo:color="#b00000"/></style:style>
-  <style:style style:name="label" style:family="table-cell"/>
-  <style:style style:name="head" style:family="table-cell"><style:table-cell-properties fo:background-color="#dddddd" fo:wrap-option="wrap"/><style:text-properties fo:font-weight="bold" fo:font-size="9pt"/></style:style>
-  <style:style style:name="unit" style:family="table-cell"><style:table-cell-properties fo:background-color="#dddddd"/><style:text-properties fo:font-size="9pt"/></style:style>
-  <style:style style:name="input" style:family="table-cell" style:data-style-name="Nf"><style:table-cell-properties fo:background-color="#fff3b0"/></style:style>
-  <style:style style:name="input_pct" style:family="table-cell" style:data-style-name="Np"><style:table-cell-properties fo:background-color="#fff3b0"/></style:style>
-  <style:style style:name="result" style:family="table-cell"><style:table-cell-properties fo:background-color="#eeeeee"/></style:style>
-  <style:style style:name="result_pct" style:family="table-cell" style:data-style-name="Np"><style:table-cell-properties fo:background-color="#eeeeee"/></style:style>
-  <style:style style:name="result_dpct" style:family="table-cell" style:data-style-name="Npd-neg"><style:table-cell-properties fo:background-color="#eeeeee"/></style:style>
-"""
-    body = test_sheet(readings, chart_frame()) + data_sheet()
-    return (f'<?xml version="1.0" encoding="UTF-8"?>\n<office:document-content {NS}>'
-            f'<office:automatic-styles>{auto}</office:automatic-styles>'
-            f'<office:body><office:spreadsheet>{body}</office:spreadsheet></office:body></office:document-content>')
-
-
-STYLES = f"""<?xml version="1.0" encoding="UTF-8"?>
-<office:document-styles {NS}>
- <office:automatic-styles>
-  <style:page-layout style:name="pmReport"><style:page-layout-properties fo:page-width="29.7cm" fo:page-height="21cm"
-     style:print-orientation="landscape" fo:margin-top="1cm" fo:margin-bottom="1cm" fo:margin-left="1.2cm" fo:margin-right="1.2cm"
-     style:scale-to-X="1" style:scale-to-Y="1" style:print-page-order="ttb"/></style:page-layout>
- </office:automatic-styles>
- <office:master-styles>
-  <style:master-page style:name="Report" style:page-layout-name="pmReport">
-   <style:header style:display="false"/><style:footer style:display="false"/>
-  </style:master-page>
- </office:master-styles>
-</office:document-styles>
-"""
-
-
-def meta_xml(title):
-    return (f'<?xml version="1.0" encoding="UTF-8"?>\n<office:document-meta {NS}><office:meta>'
-            f'<dc:title>{escape(title)}</dc:title><meta:generator>Isentra gen_turbine_workbook.py</meta:generator>'
-            f'</office:meta></office:document-meta>')
+    auto = (COMMON_STYLES + "  " + "\n  ".join([
+        table_style("ta_test"), table_style("ta_hidden", visible=False),
+        column_style("coA", "5.6cm"), column_style("coB", "2.0cm"), column_style("coC", "2.45cm")]) + CELL_STYLES)
+    return document_content(auto, test_sheet(readings, chart_frame()) + data_sheet())
 
 
 def write(path, mimetype, readings, title):
     chart, dash = chart_content()
-    manifest = ('<?xml version="1.0" encoding="UTF-8"?>\n'
-                '<manifest:manifest xmlns:manifest="urn:oasis:names:tc:opendocument:xmlns:manifest:1.0" manifest:version="1.3">'
-                f'<manifest:file-entry manifest:full-path="/" manifest:version="1.3" manifest:media-type="{mimetype}"/>'
-                '<manifest:file-entry manifest:full-path="content.xml" manifest:media-type="text/xml"/>'
-                '<manifest:file-entry manifest:full-path="styles.xml" manifest:media-type="text/xml"/>'
-                '<manifest:file-entry manifest:full-path="meta.xml" manifest:media-type="text/xml"/>'
-                '<manifest:file-entry manifest:full-path="Object 1/" manifest:version="1.3" '
-                'manifest:media-type="application/vnd.oasis.opendocument.chart"/>'
-                '<manifest:file-entry manifest:full-path="Object 1/content.xml" manifest:media-type="text/xml"/>'
-                '<manifest:file-entry manifest:full-path="Object 1/styles.xml" manifest:media-type="text/xml"/>'
-                '</manifest:manifest>')
-    tmp = path + ".tmp"
-    fixed = (1980, 1, 1, 0, 0, 0)  # reproducible archives
-    with zipfile.ZipFile(tmp, "w") as z:
-        def add(name, data, compress=zipfile.ZIP_DEFLATED):
-            info = zipfile.ZipInfo(name, fixed)
-            info.compress_type = compress
-            info.external_attr = 0o644 << 16
-            z.writestr(info, data.encode("utf-8"))
-        add("mimetype", mimetype, zipfile.ZIP_STORED)
-        add("META-INF/manifest.xml", manifest)
-        add("content.xml", content_xml(readings))
-        add("styles.xml", STYLES)
-        add("meta.xml", meta_xml(title))
-        add("Object 1/content.xml", chart)
-        add("Object 1/styles.xml", chart_styles(dash))
-    os.replace(tmp, path)
+    write_package(path, mimetype,
+                  [("content.xml", content_xml(readings)), ("styles.xml", styles_xml()),
+                   ("meta.xml", meta_xml(title, "gen_turbine_workbook.py")),
+                   ("Object 1/content.xml", chart), ("Object 1/styles.xml", chart_styles(dash))],
+                  [("Object 1/", "application/vnd.oasis.opendocument.chart", True),
+                   ("Object 1/content.xml", "text/xml", False), ("Object 1/styles.xml", "text/xml", False)])
 
 
 def main():
@@ -463,10 +328,10 @@ def main():
         sys.exit("usage: gen_turbine_workbook.py OUTDIR")
     out = sys.argv[1]
     os.makedirs(out, exist_ok=True)
-    write(os.path.join(out, "harrow-fen-unit2-turbine-test.ods"), "application/vnd.oasis.opendocument.spreadsheet",
+    write(os.path.join(out, "harrow-fen-unit2-turbine-test.ods"), MIME_ODS,
           READINGS, "Harrow Fen Unit 2 turbine section efficiency test (fictional demo)")
     write(os.path.join(out, "isentra-turbine-section-test.ots"),
-          "application/vnd.oasis.opendocument.spreadsheet-template", None,
+          MIME_OTS, None,
           "Turbine section efficiency test (Isentra)")
 
 
