@@ -33,7 +33,7 @@ import sys
 
 sys.dont_write_bytecode = True  # keep templates/ free of __pycache__
 from odf_writer import (ADDIN, MIME_ODS, MIME_OTS, COMMON_STYLES, CELL_STYLES,  # noqa: E402
-                        c_text, c_num, c_formula, c_empty, c_blank, row, table_style, column_style,
+                        c_text, c_num, c_formula, c_empty, c_blank, c_span, row, table_style, column_style,
                         content_xml, styles_xml, meta_xml, write_package)
 
 UNITS = "[$Heaters.$B$5]"  # the one units cell, as every formula refers to it
@@ -80,7 +80,8 @@ def count_is(col, rows):
 class Sheet:
     """Rows of one sheet, numbered as they are added (1-based)."""
 
-    def __init__(self):
+    def __init__(self, ncols):
+        self.ncols = ncols  # columns A.. in use; notes span all of them
         self.rows = []
 
     @property
@@ -95,15 +96,19 @@ class Sheet:
 
     def header(self, title, text, units_cell):
         self.add([c_text(title, "title")])
-        self.add([c_text(text)])
-        self.add([c_text(CAUTION, "caution")])
+        self.note(text)
+        self.note(CAUTION, "caution_note")
         self.add([c_empty()])
         self.add(units_cell, expect=5)
         self.add([c_empty()])
 
-    def xml(self, name, ncols):
+    def note(self, text, style="note", expect=None):
+        """A paragraph across the whole width, wrapped."""
+        return self.add([c_span(text, style, self.ncols)], expect)
+
+    def xml(self, name):
         cols = ('<table:table-column table:style-name="coA"/><table:table-column table:style-name="coB"/>'
-                f'<table:table-column table:style-name="coC" table:number-columns-repeated="{ncols - 2}"/>')
+                f'<table:table-column table:style-name="coC" table:number-columns-repeated="{self.ncols - 2}"/>')
         return f'<table:table table:name="{name}" table:style-name="ta_sheet">{cols}' + "".join(self.rows) + "</table:table>"
 
 
@@ -138,7 +143,7 @@ HEATERS = [
 ]
 HEATER_ROWS = [  # (row, label, quantity)
     (8, "Heater", "name"),
-    (9, "Drains cascade in from (name of the heater above; empty if none)", "name"),
+    (9, "Drains cascade in from (the heater above; empty if none)", "name"),
     (10, "Shell pressure (extraction steam at the heater inlet)", "p"),
     (11, "Extraction steam temperature at the heater inlet", "T"),
     (12, "Feedwater inlet temperature", "T"),
@@ -146,7 +151,7 @@ HEATER_ROWS = [  # (row, label, quantity)
     (14, "Feedwater pressure", "p"),
     (15, "Drain outlet temperature", "T"),
     (16, "Feedwater flow", "m"),
-    (17, "Cascading drain flow in (used when row 9 names a heater)", "m"),
+    (17, "Cascading drain flow in (when row 9 names a heater)", "m"),
     (18, "Design TTD", "dT"),
     (19, "Design DCA", "dT"),
 ]
@@ -163,11 +168,11 @@ def heater_results(c):
     ext_ok = (f"AND(COUNT([.{c}{R_PSH}:.{c}{R_MFW}])={R_MFW - R_PSH + 1};"
               f"OR({no_casc};AND(ISNUMBER({r(R_MCASC)});ISNUMBER({r(32)}))))")
     return [
-        (23, "Terminal temperature difference TTD = Tsat(shell p) - feedwater outlet T", "dT", "result_2",
+        (23, "TTD = Tsat(shell p) - feedwater outlet T", "dT", "result_2",
          when(count_is(c, [R_PSH, R_TOUT]), call("FWHTTD", r(R_PSH), r(R_TOUT)))),
         (24, "TTD test - design", "dT", "result_2",
          when(f"AND(ISNUMBER({r(23)});ISNUMBER({r(R_TTD_D)}))", f"{r(23)}-{r(R_TTD_D)}")),
-        (25, "Drain cooler approach DCA = drain outlet T - feedwater inlet T", "dT", "result_2",
+        (25, "DCA = drain outlet T - feedwater inlet T", "dT", "result_2",
          when(count_is(c, [R_TDR, R_TIN]), call("FWHDCA", r(R_TDR), r(R_TIN)))),
         (26, "DCA test - design", "dT", "result_2",
          when(f"AND(ISNUMBER({r(25)});ISNUMBER({r(R_DCA_D)}))", f"{r(25)}-{r(R_DCA_D)}")),
@@ -192,7 +197,7 @@ def heater_results(c):
 
 
 def heaters_sheet(demo):
-    s = Sheet()
+    s = Sheet(2 + len(HEATER_COLS))
     s.header("Harrow Fen Power Station, Unit 2 (a fictional plant): feedwater heater, pump and heat rate test" if demo
              else "Plant performance test: closed feedwater heaters, feed and condensate pumps, heat rate",
              "Routine performance test at 660 MW, invented readings for the Isentra demo. Heaters are in columns;"
@@ -200,8 +205,8 @@ def heaters_sheet(demo):
              else "Enter the readings (absolute pressures) in the yellow cells; the grey cells are calculated by the"
              " Isentra add-in (IAPWS-IF97). Heaters are in columns; name the heater whose drains cascade in.",
              [c_text("Units for the whole workbook", "label"), c_text("SI", "input"),
-              c_text("SI or US, for all three sheets. SI: MPa (absolute), °C, K, kg/s, kJ/kg.  "
-                     "US: psia, °F, Δ°F, lbm/h, Btu/lbm. Powers in kW or MW either way.")])
+              c_span("SI or US, for all three sheets. SI: MPa (absolute), °C, K, kg/s, kJ/kg.  "
+                     "US: psia, °F, Δ°F, lbm/h, Btu/lbm. Powers in kW or MW either way.", "note", len(HEATER_COLS))])
     s.add([c_text("Readings and design values", "subtitle")], expect=7)
     for n, label, q in HEATER_ROWS:
         cells = [c_text(label, "head" if n == R_NAME else "label"), unit_cell(q) if n != R_NAME else c_text("Unit", "head")]
@@ -212,23 +217,23 @@ def heaters_sheet(demo):
                 v = HEATERS[k][n - R_NAME] if demo else None
                 if v == "":
                     v = None
-            cells.append(input_cell(v))
+            cells.append(input_cell(v, "input_name" if q == "name" else "input"))
         s.add(cells, expect=n)
     s.add([c_empty()])
     s.add([c_text("Results", "subtitle")], expect=21)
     s.add([c_text("Heater", "head"), c_text("Unit", "head")]
-          + [c_formula(f"{ref(c, R_NAME)}&\"\"", "head", True) for c in HEATER_COLS], expect=22)
+          + [c_formula(f"{ref(c, R_NAME)}&\"\"", "head_name", True) for c in HEATER_COLS], expect=22)
     per_col = [heater_results(c) for c in HEATER_COLS]
     for i, (n, label, q, _, _) in enumerate(per_col[0]):
         s.add([c_text(label, "label"), unit_cell(q)] + [c_formula(res[i][4], res[i][3]) for res in per_col], expect=n)
     s.add([c_empty()])
-    s.add([c_text("TTD and DCA as defined in ASME PTC 12.1; a negative TTD is normal for a heater with a desuperheating"
+    s.note(("TTD and DCA as defined in ASME PTC 12.1; a negative TTD is normal for a heater with a desuperheating"
                   " zone. Extraction flow from m_fw (h_fw,out - h_fw,in) = m_ext (h_ext - h_drain) + m_casc (h_casc -"
-                  " h_drain), heat lost to the surroundings neglected; drain enthalpies at shell pressure.")])
-    s.add([c_text("A heater whose drains cascade in from another one needs that heater's shell pressure and drain"
-                  " temperature, in this sheet, under the name given in row 9.")])
+                  " h_drain), heat lost to the surroundings neglected; drain enthalpies at shell pressure."))
+    s.note(("A heater whose drains cascade in from another one needs that heater's shell pressure and drain"
+                  " temperature, in this sheet, under the name given in row 9."))
     version_row(s)
-    return s.xml("Heaters", 2 + len(HEATER_COLS))
+    return s.xml("Heaters")
 
 
 # ---------------------------------------------------------------- Pumps
@@ -237,8 +242,8 @@ PUMP_COLS = "CD"
 # Invented; the discharge temperatures are those that give about 81.5 % and
 # 76 % (common practice for such pumps), read to 0.01 K.
 PUMPS = [
-    ("Boiler feed pump A", 2.05, 175.62, 20.35, 179.12, 267.5, 0.83),
-    ("Condensate pump A", 0.062, 36.42, 2.98, 36.72, 414.0, 0.78),
+    ("Feed pump A", 2.05, 175.62, 20.35, 179.12, 267.5, 0.83),
+    ("Cond. pump A", 0.062, 36.42, 2.98, 36.72, 414.0, 0.78),
 ]
 PUMP_ROWS = [
     (8, "Pump", "name"),
@@ -285,7 +290,7 @@ def pump_results(c):
 
 
 def pumps_sheet(demo):
-    s = Sheet()
+    s = Sheet(2 + len(PUMP_COLS))
     s.header("Harrow Fen Power Station, Unit 2: feed and condensate pump efficiency" if demo
              else "Pump efficiency by the thermodynamic method",
              "Efficiency from suction and discharge pressure and temperature: (h_s - h_in)/(h_out - h_in),"
@@ -295,24 +300,24 @@ def pumps_sheet(demo):
         cells = [c_text(label, "head" if n == 8 else "label"), unit_cell(q) if n != 8 else c_text("Unit", "head")]
         for k, _ in enumerate(PUMP_COLS):
             if n == 8:
-                v = PUMPS[k][0] if demo else ("Boiler feed pump", "Condensate pump")[k]
+                v = PUMPS[k][0] if demo else ("Feed pump", "Cond. pump")[k]
             else:
                 v = PUMPS[k][n - 8] if demo else None
-            cells.append(input_cell(v, "input_pct" if q == "%" else "input"))
+            cells.append(input_cell(v, {"%": "input_pct", "name": "input_name"}.get(q, "input")))
         s.add(cells, expect=n)
-    s.add([c_text(PUMP_NOTE, "caution")], expect=15)
+    s.note(PUMP_NOTE, "caution_note", expect=15)
     s.add([c_empty()])
     s.add([c_text("Results (thermodynamic method)", "subtitle")], expect=17)
     s.add([c_text("Pump", "head"), c_text("Unit", "head")]
-          + [c_formula(f"{ref(c, 8)}&\"\"", "head", True) for c in PUMP_COLS], expect=18)
+          + [c_formula(f"{ref(c, 8)}&\"\"", "head_name", True) for c in PUMP_COLS], expect=18)
     per_col = [pump_results(c) for c in PUMP_COLS]
     for i, (n, label, q, _, _) in enumerate(per_col[0]):
         s.add([c_text(label, "label"), unit_cell(q)] + [c_formula(res[i][4], res[i][3]) for res in per_col], expect=n)
     s.add([c_empty()])
-    s.add([c_text("The power absorbed by the water excludes bearing, seal and coupling losses: the shaft power is"
-                  " larger. A leak-off or balance flow returned to suction belongs in the flow reading.")])
+    s.note(("The power absorbed by the water excludes bearing, seal and coupling losses: the shaft power is"
+                  " larger. A leak-off or balance flow returned to suction belongs in the flow reading."))
     version_row(s)
-    return s.xml("Pumps", 2 + len(PUMP_COLS))
+    return s.xml("Pumps")
 
 
 # ---------------------------------------------------------------- Heat rate
@@ -360,7 +365,7 @@ def run_results(c):
         (31, "Turbine cycle heat rate", "hr", "result_1", when(base, call("HEATRATECYCLE", *q_args))),
         (32, "Cycle heat rate test - design", "%", "result_dpct",
          when(f"COUNT({r(31)};{r(22)})=2", f"{r(31)}/{r(22)}-1")),
-        (33, "Heat added to the cycle (cycle heat rate x output / 1 kWh)", "MW", "result_2",
+        (33, "Heat added to the cycle (heat rate x gross output / 1 kWh)", "MW", "result_2",
          when(f"ISNUMBER({r(31)})", f"{r(31)}*{r(19)}/{KWH}")),
         (34, "Turbine cycle efficiency (1 kWh / cycle heat rate)", "%", "result_pct",
          when(f"ISNUMBER({r(31)})", f"{KWH}/{r(31)}")),
@@ -375,7 +380,7 @@ def run_results(c):
 
 
 def heat_rate_sheet(demo):
-    s = Sheet()
+    s = Sheet(2 + len(RUN_COLS))
     s.header("Harrow Fen Power Station, Unit 2: heat rate test" if demo else "Heat rate test: turbine cycle and net unit",
              "Heat added to the cycle m_ms (h_ms - h_fw) + m_rh (h_hrh - h_crh); cycle heat rate = heat added / gross"
              " output; net unit heat rate = heat added / boiler efficiency / (gross - auxiliary power).",
@@ -388,22 +393,23 @@ def heat_rate_sheet(demo):
                 v = RUNS[k][0] if demo else f"Run {k + 1}"
             else:
                 v = RUNS[k][n - 8] if demo else None
-            cells.append(input_cell(v, "input_pct" if q == "%" else "input"))
+            cells.append(input_cell(v, {"%": "input_pct", "name": "input_name"}.get(q, "input")))
         s.add(cells, expect=n)
     s.add([c_text("1 kWh in the heat rate's unit", "label"), unit_cell("hr"), c_formula(f"IF({US};{KWH_US};3600)", "result_2")],
           expect=23)
-    s.add([c_text("Generator output and auxiliary power in MW; the add-in takes kW (x 1000 in the formulas).")])
+    s.add([c_empty()])
     s.add([c_text("Results", "subtitle")], expect=25)
     s.add([c_text("Test run", "head"), c_text("Unit", "head")]
-          + [c_formula(f"{ref(c, 8)}&\"\"", "head", True) for c in RUN_COLS], expect=26)
+          + [c_formula(f"{ref(c, 8)}&\"\"", "head_name", True) for c in RUN_COLS], expect=26)
     per_col = [run_results(c) for c in RUN_COLS]
     for i, (n, label, q, _, _) in enumerate(per_col[0]):
         s.add([c_text(label, "label"), unit_cell(q)] + [c_formula(res[i][4], res[i][3]) for res in per_col], expect=n)
     s.add([c_empty()])
-    s.add([c_text("1 kWh is 3600 kJ or 3412.14 Btu; an efficiency is that energy divided by the heat rate."
-                  " Test - design is relative: (test / design - 1).")])
+    s.note(("1 kWh is 3600 kJ or 3412.14 Btu; an efficiency is that energy divided by the heat rate."
+                  " Test - design is relative: (test / design - 1). Generator output and auxiliary power are in MW; the"
+                  " add-in takes kW (x 1000 in the formulas)."))
     version_row(s)
-    return s.xml("Heat rate", 2 + len(RUN_COLS))
+    return s.xml("Heat rate")
 
 
 # ---------------------------------------------------------------- document
@@ -419,8 +425,19 @@ def result_style(name, data_style):
 
 
 def document(demo):
-    extra = [table_style("ta_sheet"), column_style("coA", "9.5cm"), column_style("coB", "2.1cm"),
-             column_style("coC", "3.0cm")]
+    extra = [table_style("ta_sheet"), column_style("coA", "11.8cm"), column_style("coB", "2.1cm"),
+             column_style("coC", "3.2cm")]
+    extra += ['<style:style style:name="input_name" style:family="table-cell"><style:table-cell-properties'
+              ' fo:background-color="#fff3b0"/><style:paragraph-properties fo:text-align="end"/></style:style>',
+              '<style:style style:name="head_name" style:family="table-cell">'
+              '<style:table-cell-properties fo:background-color="#dddddd" fo:wrap-option="wrap"/>'
+              '<style:paragraph-properties fo:text-align="end"/><style:text-properties fo:font-weight="bold"'
+              ' fo:font-size="9pt"/></style:style>',
+              '<style:style style:name="note" style:family="table-cell"><style:table-cell-properties fo:wrap-option="wrap"'
+              ' style:vertical-align="top"/></style:style>',
+              '<style:style style:name="caution_note" style:family="table-cell"><style:table-cell-properties'
+              ' fo:wrap-option="wrap" style:vertical-align="top"/><style:text-properties fo:font-weight="bold"'
+              ' fo:color="#b00000"/></style:style>']
     for d in (1, 2, 3, 5):
         extra += [number_style(f"Nr{d}", d), result_style(f"result_{d}", f"Nr{d}")]
     auto = COMMON_STYLES + "  " + "\n  ".join(extra) + CELL_STYLES

@@ -76,6 +76,13 @@ def c_empty(n=1):
     return f'<table:table-cell table:number-columns-repeated="{n}"/>'
 
 
+def c_span(s, style, span):
+    """A text cell merged across `span` columns (the covered cells follow), e.g. a wrapped note."""
+    cover = f'<table:covered-table-cell table:number-columns-repeated="{span - 1}"/>' if span > 1 else ""
+    return (f'<table:table-cell{_style(style)} table:number-columns-spanned="{span}" office:value-type="string">'
+            f'<text:p>{escape(s)}</text:p></table:table-cell>{cover}')
+
+
 def c_blank(style):
     """An empty cell that carries a style (e.g. an input cell left for the user)."""
     return f'<table:table-cell{_style(style)}/>'
