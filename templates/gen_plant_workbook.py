@@ -102,6 +102,27 @@ class Sheet:
         self.add(units_cell, expect=5)
         self.add([c_empty()])
 
+    def readings(self, rows, ncols, demo_values, blank_names):
+        """Input rows [(row, label, quantity)], the first one the column names.
+        demo_values[k][i]: column k's value in rows[i] ("" or None: blank);
+        without demo values the names are blank_names and the rest is blank."""
+        for i, (n, label, q) in enumerate(rows):
+            cells = [c_text(label, "head"), c_text("Unit", "head")] if i == 0 else [c_text(label, "label"), unit_cell(q)]
+            for k in range(ncols):
+                v = demo_values[k][i] if demo_values else (blank_names[k] if i == 0 else None)
+                cells.append(input_cell(None if v == "" else v, INPUT_STYLE.get(q, "input")))
+            self.add(cells, expect=n)
+
+    def results(self, head_label, name_row, cols, results_of, expect):
+        """The results header row (the names from name_row) and one row per
+        result of results_of(column): (row, label, quantity, style, formula)."""
+        self.add([c_text(head_label, "head"), c_text("Unit", "head")]
+                 + [c_formula(f'{ref(c, name_row)}&""', "head_name", True) for c in cols], expect=expect)
+        per_col = [results_of(c) for c in cols]
+        for i, (n, label, q, _, _) in enumerate(per_col[0]):
+            self.add([c_text(label, "label"), unit_cell(q)] + [c_formula(res[i][4], res[i][3]) for res in per_col],
+                     expect=n)
+
     def note(self, text, style="note", expect=None):
         """A paragraph across the whole width, wrapped."""
         return self.add([c_span(text, style, self.ncols)], expect)
@@ -110,6 +131,9 @@ class Sheet:
         cols = ('<table:table-column table:style-name="coA"/><table:table-column table:style-name="coB"/>'
                 f'<table:table-column table:style-name="coC" table:number-columns-repeated="{self.ncols - 2}"/>')
         return f'<table:table table:name="{name}" table:style-name="ta_sheet">{cols}' + "".join(self.rows) + "</table:table>"
+
+
+INPUT_STYLE = {"%": "input_pct", "name": "input_name"}
 
 
 def input_cell(v, style="input"):
@@ -208,30 +232,17 @@ def heaters_sheet(demo):
               c_span("SI or US, for all three sheets. SI: MPa (absolute), °C, K, kg/s, kJ/kg.  "
                      "US: psia, °F, Δ°F, lbm/h, Btu/lbm. Powers in kW or MW either way.", "note", len(HEATER_COLS))])
     s.add([c_text("Readings and design values", "subtitle")], expect=7)
-    for n, label, q in HEATER_ROWS:
-        cells = [c_text(label, "head" if n == R_NAME else "label"), unit_cell(q) if n != R_NAME else c_text("Unit", "head")]
-        for k, c in enumerate(HEATER_COLS):
-            if n == R_NAME:
-                v = HEATERS[k][0] if demo else f"Heater {k + 1}"
-            else:
-                v = HEATERS[k][n - R_NAME] if demo else None
-                if v == "":
-                    v = None
-            cells.append(input_cell(v, "input_name" if q == "name" else "input"))
-        s.add(cells, expect=n)
+    s.readings(HEATER_ROWS, len(HEATER_COLS), HEATERS if demo else None,
+               [f"Heater {k + 1}" for k in range(len(HEATER_COLS))])
     s.add([c_empty()])
     s.add([c_text("Results", "subtitle")], expect=21)
-    s.add([c_text("Heater", "head"), c_text("Unit", "head")]
-          + [c_formula(f"{ref(c, R_NAME)}&\"\"", "head_name", True) for c in HEATER_COLS], expect=22)
-    per_col = [heater_results(c) for c in HEATER_COLS]
-    for i, (n, label, q, _, _) in enumerate(per_col[0]):
-        s.add([c_text(label, "label"), unit_cell(q)] + [c_formula(res[i][4], res[i][3]) for res in per_col], expect=n)
+    s.results("Heater", R_NAME, HEATER_COLS, heater_results, expect=22)
     s.add([c_empty()])
-    s.note(("TTD and DCA as defined in ASME PTC 12.1; a negative TTD is normal for a heater with a desuperheating"
-                  " zone. Extraction flow from m_fw (h_fw,out - h_fw,in) = m_ext (h_ext - h_drain) + m_casc (h_casc -"
-                  " h_drain), heat lost to the surroundings neglected; drain enthalpies at shell pressure."))
-    s.note(("A heater whose drains cascade in from another one needs that heater's shell pressure and drain"
-                  " temperature, in this sheet, under the name given in row 9."))
+    s.note("TTD and DCA as defined in ASME PTC 12.1; a negative TTD is normal for a heater with a desuperheating"
+           " zone. Extraction flow from m_fw (h_fw,out - h_fw,in) = m_ext (h_ext - h_drain) + m_casc (h_casc -"
+           " h_drain), heat lost to the surroundings neglected; drain enthalpies at shell pressure.")
+    s.note("A heater whose drains cascade in from another one needs that heater's shell pressure and drain"
+           " temperature, in this sheet, under the name given in row 9.")
     version_row(s)
     return s.xml("Heaters")
 
@@ -296,26 +307,14 @@ def pumps_sheet(demo):
              "Efficiency from suction and discharge pressure and temperature: (h_s - h_in)/(h_out - h_in),"
              " h_s = h(p_out, s_in), IAPWS-IF97.", linked_units_cell())
     s.add([c_text("Readings", "subtitle")], expect=7)
-    for n, label, q in PUMP_ROWS:
-        cells = [c_text(label, "head" if n == 8 else "label"), unit_cell(q) if n != 8 else c_text("Unit", "head")]
-        for k, _ in enumerate(PUMP_COLS):
-            if n == 8:
-                v = PUMPS[k][0] if demo else ("Feed pump", "Cond. pump")[k]
-            else:
-                v = PUMPS[k][n - 8] if demo else None
-            cells.append(input_cell(v, {"%": "input_pct", "name": "input_name"}.get(q, "input")))
-        s.add(cells, expect=n)
+    s.readings(PUMP_ROWS, len(PUMP_COLS), PUMPS if demo else None, ["Feed pump", "Cond. pump"])
     s.note(PUMP_NOTE, "caution_note", expect=15)
     s.add([c_empty()])
     s.add([c_text("Results (thermodynamic method)", "subtitle")], expect=17)
-    s.add([c_text("Pump", "head"), c_text("Unit", "head")]
-          + [c_formula(f"{ref(c, 8)}&\"\"", "head_name", True) for c in PUMP_COLS], expect=18)
-    per_col = [pump_results(c) for c in PUMP_COLS]
-    for i, (n, label, q, _, _) in enumerate(per_col[0]):
-        s.add([c_text(label, "label"), unit_cell(q)] + [c_formula(res[i][4], res[i][3]) for res in per_col], expect=n)
+    s.results("Pump", 8, PUMP_COLS, pump_results, expect=18)
     s.add([c_empty()])
-    s.note(("The power absorbed by the water excludes bearing, seal and coupling losses: the shaft power is"
-                  " larger. A leak-off or balance flow returned to suction belongs in the flow reading."))
+    s.note("The power absorbed by the water excludes bearing, seal and coupling losses: the shaft power is"
+           " larger. A leak-off or balance flow returned to suction belongs in the flow reading.")
     version_row(s)
     return s.xml("Pumps")
 
@@ -386,28 +385,16 @@ def heat_rate_sheet(demo):
              " output; net unit heat rate = heat added / boiler efficiency / (gross - auxiliary power).",
              linked_units_cell())
     s.add([c_text("Readings (one column per test run)", "subtitle")], expect=7)
-    for n, label, q in RUN_ROWS:
-        cells = [c_text(label, "head" if n == 8 else "label"), unit_cell(q) if n != 8 else c_text("Unit", "head")]
-        for k, _ in enumerate(RUN_COLS):
-            if n == 8:
-                v = RUNS[k][0] if demo else f"Run {k + 1}"
-            else:
-                v = RUNS[k][n - 8] if demo else None
-            cells.append(input_cell(v, {"%": "input_pct", "name": "input_name"}.get(q, "input")))
-        s.add(cells, expect=n)
+    s.readings(RUN_ROWS, len(RUN_COLS), RUNS if demo else None, [f"Run {k + 1}" for k in range(len(RUN_COLS))])
     s.add([c_text("1 kWh in the heat rate's unit", "label"), unit_cell("hr"), c_formula(f"IF({US};{KWH_US};3600)", "result_2")],
           expect=23)
     s.add([c_empty()])
     s.add([c_text("Results", "subtitle")], expect=25)
-    s.add([c_text("Test run", "head"), c_text("Unit", "head")]
-          + [c_formula(f"{ref(c, 8)}&\"\"", "head_name", True) for c in RUN_COLS], expect=26)
-    per_col = [run_results(c) for c in RUN_COLS]
-    for i, (n, label, q, _, _) in enumerate(per_col[0]):
-        s.add([c_text(label, "label"), unit_cell(q)] + [c_formula(res[i][4], res[i][3]) for res in per_col], expect=n)
+    s.results("Test run", 8, RUN_COLS, run_results, expect=26)
     s.add([c_empty()])
-    s.note(("1 kWh is 3600 kJ or 3412.14 Btu; an efficiency is that energy divided by the heat rate."
-                  " Test - design is relative: (test / design - 1). Generator output and auxiliary power are in MW; the"
-                  " add-in takes kW (x 1000 in the formulas)."))
+    s.note("1 kWh is 3600 kJ or 3412.14 Btu; an efficiency is that energy divided by the heat rate."
+           " Test - design is relative: (test / design - 1). Generator output and auxiliary power are in MW; the"
+           " add-in takes kW (x 1000 in the formulas).")
     version_row(s)
     return s.xml("Heat rate")
 
