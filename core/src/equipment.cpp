@@ -230,13 +230,6 @@ double efficiency(const State& in, double p_out, double h_out) {
 const char* const to_ph_expansion =
     "for wet steam give the inlet enthalpy and use the (p,h) form, e.g. STEAM.TURBINE.HOUT.PH";
 
-// (dv/dT)_p of a single-phase steam state from cp - cv = T v alpha^2 / kappa_T
-// (alpha > 0 for steam), in m3/(kg K).
-double dvdT_p(const State& st) {
-    const double kappaT = st.drhodp_T / st.rho;  // 1/MPa
-    const double a2 = std::max(0.0, (st.cp - st.cv) * kappaT / (1e3 * st.T * st.v));
-    return std::sqrt(a2) * st.v;
-}
 
 }  // namespace
 
@@ -313,7 +306,7 @@ EfficiencyUncertainty section_efficiency_uncertainty(double p_in, double T_in, d
     const double eta = N / D;
     r.eta = eta;
     // Partial derivatives of the three enthalpies (kJ/kg per K or per MPa).
-    const double dv1 = dvdT_p(in), dv2 = dvdT_p(out);
+    const double dv1 = in.dvdT_p, dv2 = out.dvdT_p;  // (dv/dT)_p from the basic equations
     const double dh1_dT = in.cp, dh1_dp = 1e3 * (in.v - in.T * dv1);
     const double ds1_dT = in.cp / in.T, ds1_dp = -1e3 * dv1;
     const double dh2_dT = out.cp, dh2_dp = 1e3 * (out.v - out.T * dv2);

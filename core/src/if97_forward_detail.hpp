@@ -169,6 +169,8 @@ inline Props props_from_gibbs_split(double p, double T, double pi, double tau,
     r.w = std::sqrt(w2);
     // (dv/dp)_T = -(RT/p^2)(1 - pi^2 gamma^r_pipi) * 1e-3; drho/dp = -rho^2 dv/dp.
     r.drhodp_T = r.rho * r.rho * 1e-3 * RT * ppgpp / (p * p);
+    // (dv/dT)_p = (R/p) pi (gamma_pi - tau gamma_pitau) = (R/p) x.
+    r.dvdT_p = 1e-3 * R * x / p;
     return r;
 }
 

@@ -228,7 +228,7 @@ namespace {
 // itself: cp and (d rho/d p)_T are infinite there (rounding would otherwise
 // leave huge numbers of either sign).
 Props singular(Props c) {
-    c.cp = c.drhodp_T = std::numeric_limits<double>::infinity();
+    c.cp = c.drhodp_T = c.dvdT_p = std::numeric_limits<double>::infinity();
     return c;
 }
 }  // namespace

@@ -81,6 +81,8 @@ Props region1(double p, double T) {
     r.w = std::sqrt(1e3 * RT * gp * gp / (x * x / (tau * tau * gtt) - gpp));
     // v = (RT/p*) gamma_pi -> (dv/dp)_T = (RT/p*^2) gamma_pipi.
     r.drhodp_T = -r.rho * r.rho * 1e-3 * RT * gpp / (pstar * pstar);
+    // (dv/dT)_p = (R/p*)(gamma_pi - tau gamma_pitau) = (R pi / p) x.
+    r.dvdT_p = 1e-3 * R * pi * x / p;
     return r;
 }
 

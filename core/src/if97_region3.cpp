@@ -77,6 +77,8 @@ Props region3(double rho, double T) {
     r.w = std::sqrt(1e3 * RT * (y - x * x / t2ftt));
     // (dp/drho)_T = RT (2 delta phi_delta + delta^2 phi_deltadelta), in MPa per kg/m3.
     r.drhodp_T = 1e3 / (RT * y);
+    // (dp/dT)_rho = rho R x; (dv/dT)_p = (dp/dT)_rho (d rho/d p)_T / rho^2.
+    r.dvdT_p = 1e-3 * R * x * r.drhodp_T / rho;
     return r;
 }
 

@@ -82,6 +82,7 @@ State from_props(const Props& pr, double p_in, int side = 0) {
     st.w = pr.w;
     st.kappa = pr.w * pr.w * pr.rho / (pr.p * 1e6);
     st.drhodp_T = pr.drhodp_T;
+    st.dvdT_p = pr.dvdT_p;
     st.region = pr.region;
     st.x = nan_v;
     if (p_in >= pc)
@@ -136,8 +137,9 @@ State two_phase(const SatPair& sp, double p, double T, double x) {
         st.w = e.w;
         st.kappa = e.w * e.w * e.rho / (e.p * 1e6);
         st.drhodp_T = e.drhodp_T;
+        st.dvdT_p = e.dvdT_p;
     } else {
-        st.cp = st.cv = st.w = st.kappa = st.drhodp_T = nan_v;
+        st.cp = st.cv = st.w = st.kappa = st.drhodp_T = st.dvdT_p = nan_v;
     }
     return st;
 }
@@ -725,11 +727,10 @@ bool hs_wet(double h, double s, State& out) {
 
 // Fastest path of state_hs for regions 1, 2 and 5: two-dimensional Newton in
 // (p,T) on the Gibbs equation, from the SR2-01 p(h,s) and the R7-97 T(p,h)
-// backward values. Derivatives at constant T: (dh/dp)_T = v (1 - T alpha),
-// (ds/dp)_T = -v alpha, with the cubic expansion coefficient alpha from
-// cp - cv = T v alpha^2 / kappa_T (alpha > 0: regions 2 and 5, and region 1
-// above 300 K, clear of water's density maximum). Accepted only if it
-// converges tightly and (p,T) lies in the region whose equation was used.
+// backward values. Derivatives at constant T: (dh/dp)_T = v - T (dv/dT)_p,
+// (ds/dp)_T = -(dv/dT)_p, from the Gibbs equation's own derivatives. Accepted
+// only if it converges tightly and (p,T) lies in the region whose equation
+// was used.
 bool hs_gibbs2d(double h, double s, int region, State& out) {
     double p = region == 1 ? region1_p_hs(h, s) : region2_p_hs(h, s);
     if (!(p > 0 && p <= p_max)) return false;
@@ -738,10 +739,8 @@ bool hs_gibbs2d(double h, double s, int region, State& out) {
     if (!(T >= T_min && T <= T_max)) return false;
     for (int it = 0; it < 12; ++it) {
         const Props pr = props_region(p, T, region);
-        const double alpha2 = 1e-3 * (pr.cp - pr.cv) * pr.drhodp_T / T;
-        if (!(alpha2 > 0)) return false;
-        const double alpha = std::sqrt(alpha2);
-        const double h_p = 1e3 * pr.v * (1 - T * alpha), s_p = -1e3 * pr.v * alpha;
+        // (dh/dp)_T = v - T (dv/dT)_p, (ds/dp)_T = -(dv/dT)_p (Maxwell), in kJ/(kg MPa).
+        const double h_p = 1e3 * (pr.v - T * pr.dvdT_p), s_p = -1e3 * pr.dvdT_p;
         const double h_T = pr.cp, s_T = pr.cp / T;
         const double f1 = pr.h - h, f2 = pr.s - s;
         const double det = h_p * s_T - h_T * s_p;

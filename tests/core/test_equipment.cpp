@@ -536,7 +536,11 @@ TEST(EquipmentUncertainty, SensitivitiesMatchFiniteDifferences) {
             const double fd = (eq::section_efficiency_pT_pT(up[0], up[1], up[2], up[3]) -
                                eq::section_efficiency_pT_pT(dn[0], dn[1], dn[2], dn[3])) /
                               (2 * steps[i]);
-            EXPECT_LT(rel(u.theta[i], fd), 2e-6) << "case p_in = " << c[0] << ", input " << i;
+            // Thermodynamic sensitivities ((dh/ds)_p = T, (dh/dp)_s = v) against differences of
+            // the IF97 functions: where the isentropic end point is wet they differ by a few
+            // 1e-6, IF97's own region-4 inconsistency (Eq. 30 vs the basic equations' Gibbs
+            // equality), e.g. hfg/sfg = 1.0000045 Tsat at 0.148 MPa.
+            EXPECT_LT(rel(u.theta[i], fd), 5e-6) << "case p_in = " << c[0] << ", input " << i;
         }
         double sum = 0, sq = 0;
         for (int i = 0; i < 4; ++i) {

@@ -281,3 +281,36 @@ TEST(IF97ForwardB23, CheckPoint) {
     for (double T : {623.15, 700.0, 863.15})
         EXPECT_TRUE(RelNear(if97::b23_T(if97::b23_p(T)), T, 1e-12)) << "T=" << T;
 }
+
+// (dv/dT)_p from each basic equation's own derivatives against central
+// differences of v at constant p (the equations themselves: no external value).
+TEST(IF97Derivatives, DvDTAtConstantPressure) {
+    struct Case {
+        const char* what;
+        std::function<if97::Props(double)> at_T;  // the state at T, p fixed
+        double T;
+    };
+    const Case cases[] = {
+        {"region 1, 3 MPa", [](double T) { return if97::region1(3.0, T); }, 300.0},
+        {"region 1 near 4 degC (alpha ~ 0)", [](double T) { return if97::region1(0.1, T); }, 277.0},
+        {"region 1, 80 MPa", [](double T) { return if97::region1(80.0, T); }, 500.0},
+        {"region 2, 0.0035 MPa", [](double T) { return if97::region2(0.0035, T); }, 300.0},
+        {"region 2, 30 MPa", [](double T) { return if97::region2(30.0, T); }, 700.0},
+        {"region 2 metastable", [](double T) { return if97::region2_metastable(1.0, T); }, 450.0},
+        {"region 5", [](double T) { return if97::region5(30.0, T); }, 1500.0},
+        // region 3 at constant p: density re-solved at each T
+        {"region 3, 25 MPa", [](double T) { return if97::region3_pT(25.0, T); }, 650.0},
+        {"region 3, 50 MPa", [](double T) { return if97::region3_pT(50.0, T); }, 700.0},
+    };
+    for (const Case& c : cases) {
+        const double dT = 1e-3;
+        const if97::Props m = c.at_T(c.T);
+        const double fd = (c.at_T(c.T + dT).v - c.at_T(c.T - dT).v) / (2 * dT);
+        EXPECT_NEAR(m.dvdT_p, fd, 1e-6 * std::fabs(fd) + 1e-13) << c.what;
+    }
+    // Directly on Eq. 28 at a fixed (rho, T): (dv/dT)_p = (dp/dT)_rho (drho/dp)_T / rho^2.
+    const double rho = 500.0, T = 650.0, e = 1e-4;
+    const if97::Props r = if97::region3(rho, T);
+    const double dpdT = (if97::region3(rho, T + e).p - if97::region3(rho, T - e).p) / (2 * e);
+    EXPECT_NEAR(r.dvdT_p, dpdT * r.drhodp_T / (rho * rho), 1e-7 * std::fabs(r.dvdT_p));
+}

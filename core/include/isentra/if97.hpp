@@ -41,6 +41,7 @@ struct Props {
     double cv = 0;     // kJ/(kg K)
     double w = 0;      // m/s
     double drhodp_T = 0;  // (d rho / d p)_T in kg/(m3 MPa), needed by the transport properties
+    double dvdT_p = 0;    // (d v / d T)_p in m3/(kg K) (thermal expansion: alpha_v = dvdT_p / v)
     int region = 0;    // 1, 2, 3 or 5
 };
 

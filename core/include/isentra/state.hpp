@@ -29,6 +29,7 @@ struct State {
     // that into a NotDefined error that points at the saturated values).
     double cp = 0, cv = 0, w = 0, kappa = 0;
     double drhodp_T = 0;  // (d rho/d p)_T, kg/(m3 MPa); NaN in the dome
+    double dvdT_p = 0;    // (d v/d T)_p, m3/(kg K); NaN in the dome
     // Vapour quality inside the dome (0..1); NaN for a single-phase state
     // (see quality() for the equilibrium quality outside the dome).
     double x = 0;
