@@ -161,50 +161,68 @@ void check_expansion_pressures(double p_in, double p_out, bool strict) {
                                 : "(the inlet pressure p_in: a turbine expands the steam to a lower pressure)");
 }
 
+// The highest enthalpy of water that is not steam at p: the saturated liquid
+// below the critical pressure, the state at Tc above it (where the phase name
+// turns from compressed water to supercritical).
+double liquid_limit_h(double p) { return p < pc ? saturation_p(p).liq.h : state_pT(p, Tc).h; }
+
 // A turbine inlet given by (p,h): steam (wet, saturated, superheated or
 // supercritical), not subcooled or compressed water.
 State steam_ph(double p, double h) {
     const State in = ph(p, h, Names{"p_in", "T_in", "h_in", "s_in"});
-    if (in.phase == Phase::Liquid) {
-        const bool sub = p < pc;
-        throw RangeError("h_in", Quantity::SpecificEnergy, h,
-                         sub ? saturation_p(p).liq.h : state_pT(p, Tc).h, none,
-                         sub ? "(the saturated-liquid enthalpy at p_in: below it the inlet is subcooled water, "
-                               "not steam)"
-                             : "(the enthalpy at p_in and the critical temperature: below it, above the critical "
-                               "pressure, the inlet is compressed water, not steam)",
+    if (in.phase == Phase::Liquid)
+        throw RangeError("h_in", Quantity::SpecificEnergy, h, liquid_limit_h(p), none,
+                         p < pc ? "(the saturated-liquid enthalpy at p_in: below it the inlet is subcooled water, "
+                                  "not steam)"
+                                : "(the enthalpy at p_in and the critical temperature: below it, above the "
+                                  "critical pressure, the inlet is compressed water, not steam)",
                          ErrorCode::Impossible);
-    }
     return in;
 }
 
 // The outlet of a measured expansion (p_out, h_out): below the inlet enthalpy
 // (the section does work) and not subcooled or compressed water.
 void check_outlet(const State& in, double p_out, double h_out) {
+    check_finite("h_out", Quantity::SpecificEnergy, h_out);
     if (!(h_out < in.h))
         throw RangeError("h_out", Quantity::SpecificEnergy, h_out, none, in.h,
                          "(the inlet enthalpy: the readings show no expansion work, so there is no efficiency)",
                          ErrorCode::Impossible);
     const State out = ph(p_out, h_out, Names{"p_out", "T_out", "h_out", "s_out"});
     if (out.phase == Phase::Liquid)
-        throw RangeError("h_out", Quantity::SpecificEnergy, h_out,
-                         p_out < pc ? saturation_p(p_out).liq.h : state_pT(p_out, Tc).h, none,
+        throw RangeError("h_out", Quantity::SpecificEnergy, h_out, liquid_limit_h(p_out), none,
                          "(below it the outlet would be subcooled or compressed water, which no turbine section "
                          "delivers; check the readings)",
                          ErrorCode::Impossible);
 }
 
-// A (p,T) outlet reading at or above the inlet enthalpy.
-[[noreturn]] void no_work(const State& in, double p_out, double T_out) {
-    throw RangeError("T_out", Quantity::Temperature, T_out, none, state_ph(p_out, in.h).T,
-                     "(the temperature at p_out with the inlet enthalpy: the readings show no expansion work, "
-                     "so there is no efficiency)",
-                     ErrorCode::Impossible);
+const Names in_pT{"p_in", "T_in", "h_in", "s_in"};
+const Names out_names{"p_out", "T_out", "h_out", "s_in (isentropic end point at p_out)"};
+
+// A section inlet read as (p,T): superheated or supercritical steam.
+State section_inlet_pT(double p_in, double T_in) {
+    return steam_pT(p_in, T_in, in_pT, "inlet", "give the inlet enthalpy and use STEAM.TURBINE.EFF.PH.PH instead");
 }
 
-const Names in_pT{"p_in", "T_in", "h_in", "s_in"};
-const Names in_ph{"p_in", "T_in", "h_in", "s_in"};
-const Names out_names{"p_out", "T_out", "h_out", "s_in (isentropic end point at p_out)"};
+// Inlet and outlet of a section read as (p,T) at both ends: steam at both, a
+// lower outlet pressure, and an outlet below the inlet enthalpy.
+struct SectionReadings {
+    State in, out;
+};
+SectionReadings section_readings_pT_pT(double p_in, double T_in, double p_out, double T_out) {
+    SectionReadings r;
+    r.in = section_inlet_pT(p_in, T_in);
+    check_expansion_pressures(p_in, p_out, true);
+    r.out = steam_pT(p_out, T_out, out_names, "outlet",
+                     "use the section-efficiency function from the outlet enthalpy (from an energy balance) "
+                     "instead, STEAM.TURBINE.EFF.PT.PH");
+    if (!(r.out.h < r.in.h))
+        throw RangeError("T_out", Quantity::Temperature, T_out, none, state_ph(p_out, r.in.h).T,
+                         "(the temperature at p_out with the inlet enthalpy: the readings show no expansion "
+                         "work, so there is no efficiency)",
+                         ErrorCode::Impossible);
+    return r;
+}
 
 Expansion expand(const State& in, double p_out, double eta) {
     Expansion e;
@@ -250,21 +268,13 @@ Expansion turbine_expansion_ph(double p_in, double h_in, double p_out, double et
 }
 
 double section_efficiency_pT_pT(double p_in, double T_in, double p_out, double T_out) {
-    const State in = steam_pT(p_in, T_in, in_pT, "inlet",
-                              "give the inlet enthalpy and use STEAM.TURBINE.EFF.PH.PH instead");
-    check_expansion_pressures(p_in, p_out, true);
-    const State out = steam_pT(p_out, T_out, out_names, "outlet",
-                               "use the section-efficiency function from the outlet enthalpy (from an energy "
-                               "balance) instead, STEAM.TURBINE.EFF.PT.PH");
-    if (!(out.h < in.h)) no_work(in, p_out, T_out);
-    return efficiency(in, p_out, out.h);
+    const SectionReadings r = section_readings_pT_pT(p_in, T_in, p_out, T_out);
+    return efficiency(r.in, p_out, r.out.h);
 }
 
 double section_efficiency_pT_ph(double p_in, double T_in, double p_out, double h_out) {
-    const State in = steam_pT(p_in, T_in, in_pT, "inlet",
-                              "give the inlet enthalpy and use STEAM.TURBINE.EFF.PH.PH instead");
+    const State in = section_inlet_pT(p_in, T_in);
     check_expansion_pressures(p_in, p_out, true);
-    check_finite("h_out", Quantity::SpecificEnergy, h_out);
     check_outlet(in, p_out, h_out);
     return efficiency(in, p_out, h_out);
 }
@@ -272,7 +282,6 @@ double section_efficiency_pT_ph(double p_in, double T_in, double p_out, double h
 double section_efficiency_ph_ph(double p_in, double h_in, double p_out, double h_out) {
     const State in = steam_ph(p_in, h_in);
     check_expansion_pressures(p_in, p_out, true);
-    check_finite("h_out", Quantity::SpecificEnergy, h_out);
     check_outlet(in, p_out, h_out);
     return efficiency(in, p_out, h_out);
 }
@@ -292,13 +301,9 @@ EfficiencyUncertainty section_efficiency_uncertainty(double p_in, double T_in, d
     check_rel("u_p_out", u_p_out_rel);
     check_nonneg("u_T_out", Quantity::TemperatureDifference, u_T_out, "(an uncertainty cannot be negative)");
 
-    const State in = steam_pT(p_in, T_in, in_pT, "inlet",
-                              "give the inlet enthalpy and use STEAM.TURBINE.EFF.PH.PH instead");
-    check_expansion_pressures(p_in, p_out, true);
-    const State out = steam_pT(p_out, T_out, out_names, "outlet",
-                               "use the section-efficiency function from the outlet enthalpy (from an energy "
-                               "balance) instead, STEAM.TURBINE.EFF.PT.PH");
-    if (!(out.h < in.h)) no_work(in, p_out, T_out);
+    const SectionReadings rd = section_readings_pT_pT(p_in, T_in, p_out, T_out);
+    const State& in = rd.in;
+    const State& out = rd.out;
     const State iso = ps(p_out, in.s, out_names);
 
     EfficiencyUncertainty r;
