@@ -102,17 +102,10 @@ const PropSpec props[] = {
                     "saturated-vapour (G) function, e.g. STEAM.CPF.P or STEAM.CPG.P");
 }
 
-[[noreturn]] void at_critical(const char* what) {
-    throw Error(ErrorCode::NotDefined,
-                std::string(what) +
-                    " is not defined at the critical point (p = 22.064 MPa, T = 647.096 K) or on the limit "
-                    "of stability next to it (saturated states within about 3e-5 K of Tc), where it "
-                    "diverges");
-}
-
 double single_phase(const State& st, double value, const char* what) {
     if (st.phase == Phase::TwoPhase && !(st.x == 0.0 || st.x == 1.0)) not_in_dome(what);
-    if (critical_singularity(st.T, st.p, st.drhodp_T) || !std::isfinite(value)) at_critical(what);
+    if (critical_singularity(st.T, st.p, st.drhodp_T) || !std::isfinite(value))
+        throw critical_singularity_error(std::string(what) + " is");
     return value;
 }
 

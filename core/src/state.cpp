@@ -421,6 +421,13 @@ bool critical_singularity(double T, double p, double drhodp_T) noexcept {
     return std::fabs(T - Tc) <= 1e-9 * Tc && std::fabs(p - pc) <= 1e-9 * pc;
 }
 
+Error critical_singularity_error(const std::string& subject) {
+    return Error(ErrorCode::NotDefined,
+                 subject + " not defined at the critical point (p = 22.064 MPa, T = 647.096 K) or on the limit of "
+                           "stability next to it (saturated states within about 3e-5 K of Tc), where cp and the "
+                           "compressibility diverge");
+}
+
 State with_quality(const State& sat, double x) {
     check_x(x);
     return two_phase(SatPair{sat.liq, sat.vap}, sat.p, sat.T, x);

@@ -333,11 +333,8 @@ bool near_critical(const PhaseData& d) {
 // No finite transport property at the critical point or on the stability
 // limit next to it (see isentra::critical_singularity).
 void require_regular(const PhaseData& d) {
-    if (critical_singularity(d.T, d.p, d.drhodp))
-        throw Error(ErrorCode::NotDefined,
-                    "transport properties are not defined at the critical point (p = 22.064 MPa, T = 647.096 K) "
-                    "or on the limit of stability next to it (saturated states within about 3e-5 K of Tc), "
-                    "where they diverge");
+    if (critical_singularity(d.T, d.p, d.drhodp)) throw critical_singularity_error(prop_label(Prop::All) +
+                                                                                   std::string(" are"));
 }
 
 double mu_of(const PhaseData& d) {

@@ -843,22 +843,18 @@ double convert(double value, std::string_view from, std::string_view to, double 
                 throw Error(ErrorCode::InvalidArgument, "the value to convert must be a finite number");
             const double core = core_of(uf, value, patm_MPa);
             // Absolute temperatures and pressures cannot be negative (a gauge
-            // pressure can, down to -patm).
-            auto g10 = [](double v) {  // the limit, rounded for the sentence
-                char b[32];
-                std::snprintf(b, sizeof b, "%.10g", v);
-                return std::string(b);
-            };
-            if (uf.quantity == Q::Temperature && core < -1e-9)
-                throw Error(ErrorCode::OutOfRange, "T = " + format_number(value) + " " + uf.display +
-                                                       " is below absolute zero (" +
-                                                       g10(user_of(uf, 0.0, patm_MPa)) + " " + uf.display + ")");
-            if (uf.quantity == Q::Pressure && core < -1e-12)
+            // pressure can, down to -patm); rounding may leave a tiny -0.
+            const bool temperature = uf.quantity == Q::Temperature;
+            const bool absolute = temperature || uf.quantity == Q::Pressure;
+            if (absolute && core < (temperature ? -1e-9 : -1e-12)) {
+                char zero[32];  // the limit in the unit given, rounded for the sentence
+                std::snprintf(zero, sizeof zero, "%.10g", user_of(uf, 0.0, patm_MPa));
                 throw Error(ErrorCode::OutOfRange,
-                            "p = " + format_number(value) + " " + uf.display + " is below zero absolute pressure (" +
-                                g10(user_of(uf, 0.0, patm_MPa)) + " " + uf.display + ")");
+                            std::string(temperature ? "T = " : "p = ") + format_number(value) + " " + uf.display +
+                                (temperature ? " is below absolute zero (" : " is below zero absolute pressure (") +
+                                zero + " " + uf.display + ")");
+            }
             if (&uf == &ut) return value;
-            const bool absolute = uf.quantity == Q::Temperature || uf.quantity == Q::Pressure;
             return user_of(ut, absolute && core < 0.0 ? 0.0 : core, patm_MPa);  // -0 from rounding: 0
         }
     throw Error(ErrorCode::InvalidArgument, "cannot convert " + std::string(quantity_name(f.u[0]->quantity)) + " " +

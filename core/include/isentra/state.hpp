@@ -8,6 +8,9 @@
 // NaN as a value. All functions are reentrant (no global mutable state).
 #pragma once
 
+#include <string>
+
+#include "isentra/error.hpp"
 #include "isentra/if97.hpp"
 
 namespace isentra {
@@ -63,6 +66,9 @@ State with_quality(const State& sat, double x);
 // ((d rho/d p)_T not finite and positive), which the region-3 saturated
 // states reach within about 3e-5 K of Tc. cp diverges at both.
 bool critical_singularity(double T, double p, double drhodp_T) noexcept;
+// The NotDefined error for such a state; `subject` names what is asked for,
+// with its verb: "cp is", "transport properties are".
+Error critical_singularity_error(const std::string& subject);
 
 // Single-state solvers. Inputs in core units.
 State state_pT(double p, double T);  // throws Impossible if (p,T) lies exactly on the saturation line
