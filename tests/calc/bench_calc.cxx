@@ -102,6 +102,13 @@ void fill_column(const Doc& d, int n, const std::string& first) {
     r->fillAuto(css::sheet::FillDirection_TO_BOTTOM, 1);
 }
 
+// One array formula over C1:Cn.
+void array_formula(const Doc& d, int n, const std::string& formula) {
+    Reference<css::sheet::XArrayFormulaRange> r(d.sheet->getCellRangeByName(ou("C1:C" + std::to_string(n))),
+                                                UNO_QUERY_THROW);
+    r->setArrayFormula(ou(formula));
+}
+
 // Best of `repeat` hard recalculations, in seconds.
 double time_recalc(const Doc& d, int repeat) {
     double best = 1e300;
@@ -175,36 +182,24 @@ TEST(CalcBench, HundredThousandCells) {
                          b);
     const Row arr = run("{=STEAM.H.PT(A1:An;B1:Bn)}, one array formula",
                         [&](const Doc& d) {
-                            Reference<css::sheet::XArrayFormulaRange> r(
-                                d.sheet->getCellRangeByName(ou("C1:C" + std::to_string(n))), UNO_QUERY_THROW);
-                            r->setArrayFormula(ou("=STEAM.H.PT(A1:A" + std::to_string(n) + ";B1:B" +
-                                                  std::to_string(n) + ")"));
+                            const std::string m = std::to_string(n);
+                            array_formula(d, n, "=STEAM.H.PT(A1:A" + m + ";B1:B" + m + ")");
                         },
                         b);
     const Row arr_rise = run("{=STEAM.FWH.RISE(B1:Bn;B1:Bn)}, array formula",
                              [&](const Doc& d) {
-                                 Reference<css::sheet::XArrayFormulaRange> r(
-                                     d.sheet->getCellRangeByName(ou("C1:C" + std::to_string(n))), UNO_QUERY_THROW);
-                                 r->setArrayFormula(ou("=STEAM.FWH.RISE(B1:B" + std::to_string(n) + ";B1:B" +
-                                                       std::to_string(n) + ")"));
+                                 const std::string m = std::to_string(n);
+                                 array_formula(d, n, "=STEAM.FWH.RISE(B1:B" + m + ";B1:B" + m + ")");
                              },
                              b);
     const Row arr_sqrt = run("{=SQRT(A1:An)}, built-in array formula",
-                             [&](const Doc& d) {
-                                 Reference<css::sheet::XArrayFormulaRange> r(
-                                     d.sheet->getCellRangeByName(ou("C1:C" + std::to_string(n))), UNO_QUERY_THROW);
-                                 r->setArrayFormula(ou("=SQRT(A1:A" + std::to_string(n) + ")"));
-                             },
+                             [&](const Doc& d) { array_formula(d, n, "=SQRT(A1:A" + std::to_string(n) + ")"); },
                              b);
 
     // Calc's floor for any array result of this size: an array formula that
     // computes nothing and only copies the input column into its result.
     const Row arr_copy = run("{=A1:An}, array formula of plain references",
-                             [&](const Doc& d) {
-                                 Reference<css::sheet::XArrayFormulaRange> r(
-                                     d.sheet->getCellRangeByName(ou("C1:C" + std::to_string(n))), UNO_QUERY_THROW);
-                                 r->setArrayFormula(ou("=A1:A" + std::to_string(n)));
-                             },
+                             [&](const Doc& d) { array_formula(d, n, "=A1:A" + std::to_string(n)); },
                              b);
 
     // The same work in this process: isentra::call() per state (as the glue
