@@ -269,8 +269,8 @@ State solve_rho_region3(double p, double y, Y which, double r1, double r2, doubl
 // Fast path for region 3: two-dimensional Newton in (rho, T) on Eq. 28 for
 // p(rho,T) = p and y(rho,T) = y, started from the SR3-03 backward T and v.
 // Accepted only if it converges tightly inside [lo, hi] on a mechanically
-// stable point whose density is the branch's root at (p, T). (dp/dT)_rho comes from
-// cp - cv = T (dp/dT)_rho^2 / (rho^2 (dp/drho)_T), positive in region 3.
+// stable point whose density is the branch's root at (p, T). (dp/dT)_rho =
+// rho^2 (dv/dT)_p (dp/drho)_T from the basic equation's own derivatives.
 bool newton2d_region3(double p, double y, Y which, double lo, double hi, State& out) {
     double T = which == Y::H ? region3_T_ph(p, y) : region3_T_ps(p, y);
     const double v0 = which == Y::H ? region3_v_ph(p, y) : region3_v_ps(p, y);
@@ -281,9 +281,9 @@ bool newton2d_region3(double p, double y, Y which, double lo, double hi, State& 
     double rho = 1.0 / v0;
     for (int it = 0; it < 12; ++it) {
         const Props pr = region3(rho, T);
-        if (!(pr.drhodp_T > 0) || !(pr.cp > pr.cv)) return false;
-        const double p_rho = 1.0 / pr.drhodp_T;                                        // MPa per kg/m3
-        const double p_T = std::sqrt(1e-3 * (pr.cp - pr.cv) * rho * rho * p_rho / T);  // MPa/K, > 0 in region 3
+        if (!(pr.drhodp_T > 0)) return false;
+        const double p_rho = 1.0 / pr.drhodp_T;               // MPa per kg/m3
+        const double p_T = rho * rho * pr.dvdT_p * p_rho;     // MPa/K
         double y_rho, y_T;
         if (which == Y::H) {
             y_rho = 1e3 * (p_rho / rho - T * p_T / (rho * rho));
