@@ -581,6 +581,11 @@ double fwh_extraction_flow(double m_fw, double h_fw_in, double h_fw_out, double 
 namespace {
 // A heat rate below 3600 kJ/kWh (1 kWh of heat per kWh of electricity) would
 // mean more than 100 % efficiency (first law; 3600 kJ/kWh = 3412.14 Btu/kWh).
+void check_generator_output(double P_gen) {
+    check_finite("P_gen", Quantity::Power, P_gen);
+    if (!(P_gen > 0)) throw RangeError("P_gen", Quantity::Power, P_gen, 0.0, none, "(the generator output must be positive)");
+}
+
 double checked_heat_rate(double hr) {
     if (hr < 3600.0)
         throw Error(ErrorCode::Impossible,
@@ -613,16 +618,14 @@ double cycle_heat_input(double m_ms, double h_ms, double h_fw, double m_rh, doub
 double cycle_heat_rate(double m_ms, double h_ms, double h_fw, double m_rh, double h_hrh, double h_crh,
                        double P_gen) {
     const double q = cycle_heat_input(m_ms, h_ms, h_fw, m_rh, h_hrh, h_crh);
-    check_finite("P_gen", Quantity::Power, P_gen);
-    if (!(P_gen > 0)) throw RangeError("P_gen", Quantity::Power, P_gen, 0.0, none, "(the generator output must be positive)");
+    check_generator_output(P_gen);
     return checked_heat_rate(3600.0 * q / P_gen);
 }
 
 double net_heat_rate(double m_ms, double h_ms, double h_fw, double m_rh, double h_hrh, double h_crh,
                      double P_gen, double P_aux, double eta_boiler) {
     const double q = cycle_heat_input(m_ms, h_ms, h_fw, m_rh, h_hrh, h_crh);
-    check_finite("P_gen", Quantity::Power, P_gen);
-    if (!(P_gen > 0)) throw RangeError("P_gen", Quantity::Power, P_gen, 0.0, none, "(the generator output must be positive)");
+    check_generator_output(P_gen);
     check_nonneg("P_aux", Quantity::Power, P_aux, "(the auxiliary power cannot be negative)");
     if (!(P_aux < P_gen))
         throw RangeError("P_aux", Quantity::Power, P_aux, 0.0, P_gen,
