@@ -140,6 +140,26 @@ struct GibbsSplit {
     double gr, gr_p, gr_pp, gr_t, gr_tt, gr_pt;  // residual part
 };
 
+// The ideal-gas part gamma^o = ln(pi) + sum n_i tau^J_i of regions 2 and 5
+// (R7-97(2012) Eqs. 16 and 33) and its tau-derivatives; tp[i] = tau^J_i.
+// Weighted sums divided by tau once (tau > 0).
+inline void ideal_gas_part(double pi, double tau, const double* n, const int* J, const double* tp, int k,
+                           GibbsSplit& g) {
+    double s = 0, sJ = 0, sJJ = 0;
+    for (int i = 0; i < k; ++i) {
+        const double t = n[i] * tp[i];
+        const double dJ = J[i];
+        s += t;
+        sJ += dJ * t;
+        sJJ += dJ * (dJ - 1.0) * t;
+    }
+    const double it = 1.0 / tau;
+    const double it2 = it * it;
+    g.go = std::log(pi) + s;
+    g.go_t = sJ * it;
+    g.go_tt = sJJ * it2;
+}
+
 // Properties from Eq. (15)/(18)/(32) by the relations of R7-97(2012)
 // Table 12 (regions 2, metastable vapour) and Table 39 (region 5), which are
 // identical. p in MPa, T in K; pi = p/p*, tau = T*/T of the equation.

@@ -67,17 +67,7 @@ inline void ideal_part(double pi, double tau, const double* no, detail::GibbsSpl
     const double it3 = it2 * it;
     const double tp[kNo] = {1.0, tau, it3 * it2, it2 * it2, it3, it2, it, tau * tau,
                             tau * tau * tau};
-    double s = 0, sJ = 0, sJJ = 0;
-    for (int i = 0; i < kNo; ++i) {
-        const double t = no[i] * tp[i];
-        const double dJ = Jo[i];
-        s += t;
-        sJ += dJ * t;
-        sJJ += dJ * (dJ - 1.0) * t;
-    }
-    g.go = std::log(pi) + s;
-    g.go_t = sJ * it;
-    g.go_tt = sJJ * it2;
+    detail::ideal_gas_part(pi, tau, no, Jo, tp, kNo, g);
 }
 
 // Residual parts sum_i n_i pi^I (tau - 0.5)^J, Eqs. (17) and (19), grouped by

@@ -33,22 +33,12 @@ Props region5(double p, double T) {
     const double tau = Tstar / T;
     detail::GibbsSplit g;
 
-    // Ideal part (Table 40); weighted sums divided by tau once.
+    // Ideal part (Table 40).
     {
         const double it = 1.0 / tau;
         const double it2 = it * it;
         const double tp[kNo] = {1.0, tau, it2 * it, it2, it, tau * tau};
-        double s = 0, sJ = 0, sJJ = 0;
-        for (int i = 0; i < kNo; ++i) {
-            const double t = no[i] * tp[i];
-            const double dJ = Jo[i];
-            s += t;
-            sJ += dJ * t;
-            sJJ += dJ * (dJ - 1.0) * t;
-        }
-        g.go = std::log(pi) + s;
-        g.go_t = sJ * it;
-        g.go_tt = sJJ * it2;
+        detail::ideal_gas_part(pi, tau, no, Jo, tp, kNo, g);
     }
     // Residual part (Table 41); pi > 0, tau > 0.
     {
