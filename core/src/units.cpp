@@ -380,6 +380,17 @@ std::string normalize(std::string_view s) {
     return r;
 }
 
+// Calls f with each spelling of a '|'-separated alias list.
+template <class F>
+void for_each_alias(std::string_view aliases, F&& f) {
+    while (!aliases.empty()) {
+        const std::size_t bar = aliases.find('|');
+        f(aliases.substr(0, bar));
+        if (bar == std::string_view::npos) break;
+        aliases.remove_prefix(bar + 1);
+    }
+}
+
 // Spellings of every unit, normalised once (immutable after construction).
 struct Spelling {
     std::string exact;  // normalised
@@ -416,13 +427,7 @@ Tables::Tables() {
         };
         add(u.symbol);
         add(u.display);
-        std::string_view a = u.aliases;
-        while (!a.empty()) {
-            const std::size_t bar = a.find('|');
-            add(a.substr(0, bar));
-            if (bar == std::string_view::npos) break;
-            a.remove_prefix(bar + 1);
-        }
+        for_each_alias(u.aliases, add);
     }
     for (std::size_t s = 0; s < kSystemCount; ++s) {
         for (int q = 0; q < quantity_count; ++q) {
@@ -875,13 +880,7 @@ const std::vector<UnitInfo>& known_units() {
                 spellings.emplace_back(a);
             };
             add(u.display);
-            std::string_view a = u.aliases;
-            while (!a.empty()) {
-                const std::size_t bar = a.find('|');
-                add(a.substr(0, bar));
-                if (bar == std::string_view::npos) break;
-                a.remove_prefix(bar + 1);
-            }
+            for_each_alias(u.aliases, add);
             std::string also;
             for (const std::string& x : spellings) also += (also.empty() ? "" : ", ") + x;
             if (!also.empty()) d += "; also written " + also;
