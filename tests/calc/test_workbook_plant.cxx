@@ -272,6 +272,7 @@ TEST_F(PlantBook, DemoResultsMatchTheCoreInSiAndAfterSwitchingToUs) {
         EXPECT_GT(value("Heaters", *c, 33), 15.0) << *c;  // extraction flow, kg/s
         EXPECT_LT(value("Heaters", *c, 33), 50.0) << *c;
     }
+    // The pump readings were invented for about 81.5 % and 76 % (demo data, gen_plant_workbook.py).
     EXPECT_NEAR(value("Pumps", 'C', 26), 0.815, 0.005);  // feed pump efficiency
     EXPECT_NEAR(value("Pumps", 'D', 26), 0.76, 0.01);    // condensate pump efficiency
     for (const char* c = kRunCols; *c; ++c) {
