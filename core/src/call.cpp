@@ -25,7 +25,7 @@ std::string fmt(double v) {
 // Re-words a core error in the user's units.
 std::string explain(const Error& e, const units::UnitSpec& spec) {
     const auto* re = dynamic_cast<const RangeError*>(&e);
-    return re ? re->sentence(spec) : e.what();
+    return re ? units::range_sentence(*re, spec) : e.what();
 }
 
 Value error_value(const Error& e, const units::UnitSpec& spec) { return Value::of_error(e.code(), explain(e, spec)); }

@@ -4,8 +4,6 @@
 #include <cmath>
 #include <cstdio>
 
-#include "isentra/units.hpp"
-
 namespace isentra {
 namespace {
 
@@ -16,12 +14,12 @@ std::string num(double v, int digits = 6) {
     return buf;
 }
 
-// One sentence for an input outside [low, high], in the units of `spec`.
+// One sentence for an input outside [low, high], worded by `w`.
 // Numbers get 6 significant digits, more where the value and a limit would
 // otherwise print alike ("310.999 °C is below the minimum 310.999 °C").
 std::string range_sentence(const std::string& input, Quantity q, double value, double low, double high,
-                           const std::string& context, const units::UnitSpec& spec) {
-    auto u = [&](double v) { return spec.from_core(q, v); };
+                           const std::string& context, const ValueWording& w) {
+    auto u = [&](double v) { return w.from_core(q, v); };
     const bool lo = !std::isnan(low), hi = !std::isnan(high);
     int digits = 6;
     if (!std::isnan(value)) {
@@ -30,7 +28,7 @@ std::string range_sentence(const std::string& input, Quantity q, double value, d
         };
         while (digits < 15 && ((lo && alike(low)) || (hi && alike(high)))) ++digits;
     }
-    const std::string sym = spec.symbol(q);
+    const std::string sym = w.symbol(q);
     auto with_unit = [&](double v) { return sym.empty() ? num(v, digits) : num(v, digits) + " " + sym; };
     std::string m = std::isnan(value) ? input + " is not a number" : input + " = " + with_unit(u(value));
     if (lo && hi)
@@ -45,22 +43,52 @@ std::string range_sentence(const std::string& input, Quantity q, double value, d
     return m;
 }
 
-// Core units: MPa and kelvin, the rest as in SI (quantity.hpp).
-const units::UnitSpec& core_units() {
-    static const units::UnitSpec spec = units::UnitSpec::parse("K");  // built once, immutable
-    return spec;
-}
+class CoreWording final : public ValueWording {
+public:
+    double from_core(Quantity, double value) const override { return value; }
+    std::string symbol(Quantity q) const override { return core_symbol(q); }
+};
 
 }  // namespace
 
+const char* core_symbol(Quantity q) noexcept {
+    switch (q) {
+        case Quantity::None: return "";
+        case Quantity::Pressure: return "MPa";
+        case Quantity::Temperature: return "K";
+        case Quantity::TemperatureDifference: return "K";
+        case Quantity::SpecificEnergy: return "kJ/kg";
+        case Quantity::SpecificEntropy: return "kJ/(kg\u00B7K)";
+        case Quantity::SpecificVolume: return "m\u00B3/kg";
+        case Quantity::Density: return "kg/m\u00B3";
+        case Quantity::Speed: return "m/s";
+        case Quantity::DynamicViscosity: return "Pa\u00B7s";
+        case Quantity::ThermalConductivity: return "W/(m\u00B7K)";
+        case Quantity::SurfaceTension: return "N/m";
+        case Quantity::KinematicViscosity: return "m\u00B2/s";
+        case Quantity::ThermalDiffusivity: return "m\u00B2/s";
+        case Quantity::MassFlow: return "kg/s";
+        case Quantity::Power: return "kW";
+        case Quantity::HeatRate: return "kJ/kWh";
+        case Quantity::Percent: return "%";
+        case Quantity::Text: return "";
+    }
+    return "";
+}
+
+const ValueWording& core_wording() {
+    static const CoreWording wording;  // stateless, immutable
+    return wording;
+}
+
 RangeError::RangeError(const std::string& input, Quantity quantity, double value, double low,
                        double high, const std::string& context, ErrorCode code)
-    : Error(code, range_sentence(input, quantity, value, low, high, context, core_units())),
+    : Error(code, range_sentence(input, quantity, value, low, high, context, core_wording())),
       input_(input), quantity_(quantity), value_(value), low_(low), high_(high),
       context_(context) {}
 
-std::string RangeError::sentence(const units::UnitSpec& spec) const {
-    return range_sentence(input_, quantity_, value_, low_, high_, context_, spec);
+std::string range_sentence(const RangeError& e, const ValueWording& w) {
+    return range_sentence(e.input(), e.quantity(), e.value(), e.low(), e.high(), e.context(), w);
 }
 
 }  // namespace isentra

@@ -911,4 +911,23 @@ const std::vector<SystemInfo>& known_systems() {
     return list;
 }
 
+namespace {
+
+// A UnitSpec as the wording of a sentence.
+class SpecWording final : public ValueWording {
+public:
+    explicit SpecWording(const UnitSpec& spec) : spec_(spec) {}
+    double from_core(Quantity q, double value) const override { return spec_.from_core(q, value); }
+    std::string symbol(Quantity q) const override { return spec_.symbol(q); }
+
+private:
+    const UnitSpec& spec_;
+};
+
+}  // namespace
+
+std::string range_sentence(const RangeError& e, const UnitSpec& spec) {
+    return isentra::range_sentence(e, SpecWording(spec));
+}
+
 }  // namespace isentra::units

@@ -650,3 +650,22 @@ TEST(UnitsQuantityName, All) {
     EXPECT_EQ(u::quantity_name(Quantity::TemperatureDifference), "temperature difference");
     EXPECT_EQ(u::quantity_name(Quantity::MassFlow), "mass flow");
 }
+
+// The bottom layer words its own sentences in core units without the units
+// layer (core_symbol); those symbols must be the ones the unit system "K"
+// (MPa and kelvin, the core units) gives, or the two wordings would differ.
+TEST(UnitsCoreSymbols, SameAsSystemK) {
+    const auto k = u::UnitSpec::parse("K");
+    for (int q = 0; q < u::quantity_count; ++q) {
+        const auto quantity = static_cast<Quantity>(q);
+        EXPECT_EQ(isentra::core_symbol(quantity), k.symbol(quantity)) << "quantity " << q;
+    }
+}
+
+// A range sentence in core units from the units layer equals the error's own.
+TEST(UnitsCoreSymbols, RangeSentenceInCoreUnitsIsWhat) {
+    const isentra::RangeError e("p", Quantity::Pressure, 120.0, 0.0, 100.0, "(the upper limit of IAPWS-IF97)");
+    EXPECT_EQ(u::range_sentence(e, u::UnitSpec::parse("K")), e.what());
+    EXPECT_EQ(u::range_sentence(e, u::UnitSpec::parse("US")),
+              "p = 17404.5 psia is outside the range 0 to 14503.8 psia (the upper limit of IAPWS-IF97)");
+}

@@ -12,10 +12,6 @@
 
 namespace isentra {
 
-namespace units {
-class UnitSpec;
-}
-
 enum class ErrorCode {
     OutOfRange,      // an input lies outside the validity range of the formulation
     NotDefined,      // the property is not defined for this state (e.g. cp inside the dome)
@@ -55,8 +51,6 @@ public:
     double low() const noexcept { return low_; }
     double high() const noexcept { return high_; }
     const std::string& context() const noexcept { return context_; }
-    // The sentence in the units of `spec` (what() gives it in core units).
-    std::string sentence(const units::UnitSpec& spec) const;
 
 private:
     std::string input_;
@@ -64,5 +58,24 @@ private:
     double value_, low_, high_;
     std::string context_;
 };
+
+// How a sentence writes a value of some quantity: converted from core units
+// and followed by its unit symbol. The units layer words sentences in a
+// user's units through this (units::range_sentence); the error's own what()
+// uses the core units.
+class ValueWording {
+public:
+    virtual ~ValueWording() = default;
+    virtual double from_core(Quantity q, double value) const = 0;
+    virtual std::string symbol(Quantity q) const = 0;  // "" for a dimensionless value
+};
+
+// The core units' wording: values as they are, the core unit symbols.
+const ValueWording& core_wording();
+
+// The sentence of a range error ("p = 120 MPa is above the maximum 100 MPa
+// ..."), worded by `w`. Numbers get 6 significant digits, more where the value
+// and a limit would otherwise print alike.
+std::string range_sentence(const RangeError& e, const ValueWording& w);
 
 }  // namespace isentra

@@ -29,4 +29,9 @@ enum class Quantity {
     Text                  // a text argument (units string, names); not converted
 };
 
+// The symbol of a quantity's core unit, as the sentences print it ("MPa",
+// "K", "kJ/(kg·K)"; "" for dimensionless values and texts). The units layer
+// has the same symbols for its system "K" (a test checks they agree).
+const char* core_symbol(Quantity q) noexcept;
+
 }  // namespace isentra

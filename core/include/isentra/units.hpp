@@ -39,6 +39,7 @@
 #include <string_view>
 #include <vector>
 
+#include "isentra/error.hpp"
 #include "isentra/quantity.hpp"
 
 namespace isentra::units {
@@ -76,6 +77,11 @@ private:
     double patm_ = standard_atmosphere_MPa;  // MPa, for gauge units
     std::string name_;
 };
+
+// The sentence of a range error in the units of `spec` (the error's what()
+// gives it in core units), e.g. "p = 29007.5 psia is above the maximum
+// 14503.8 psia (the upper limit of IAPWS-IF97)".
+std::string range_sentence(const RangeError& e, const UnitSpec& spec);
 
 // Unit symbol of quantity q under a named system ("SI", "US", ...), for
 // descriptions. Accepts any unit text that UnitSpec::parse accepts.
