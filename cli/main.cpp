@@ -17,9 +17,9 @@
 #include <string>
 #include <vector>
 
-#include "isentra/catalogue.hpp"
-#include "isentra/formula.hpp"
-#include "isentra/units.hpp"
+#include "isentra/surface/catalogue.hpp"
+#include "isentra/surface/formula.hpp"
+#include "isentra/units/units.hpp"
 
 namespace {
 

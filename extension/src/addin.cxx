@@ -16,8 +16,8 @@
 #include <cppuhelper/supportsservice.hxx>
 #include <rtl/ustring.hxx>
 
-#include "isentra/call.hpp"
-#include "isentra/catalogue.hpp"
+#include "isentra/surface/call.hpp"
+#include "isentra/surface/catalogue.hpp"
 
 namespace isentra::uno {
 

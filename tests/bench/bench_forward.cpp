@@ -2,7 +2,7 @@
 // Timing of the IAPWS-IF97 basic (forward) equations.
 #include <benchmark/benchmark.h>
 
-#include "isentra/if97.hpp"
+#include "isentra/if97/if97.hpp"
 
 namespace if97 = isentra::if97;
 

@@ -5,7 +5,7 @@
 
 #include <vector>
 
-#include "isentra/if97.hpp"
+#include "isentra/if97/if97.hpp"
 
 namespace {
 

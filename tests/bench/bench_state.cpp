@@ -5,7 +5,7 @@
 // (figures are recorded in docs/performance.md). The states are demo values.
 #include <benchmark/benchmark.h>
 
-#include "isentra/state.hpp"
+#include "isentra/properties/state.hpp"
 
 namespace {
 

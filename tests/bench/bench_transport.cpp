@@ -6,8 +6,8 @@
 // region 3 (where mu_2 and lambda_2 are both evaluated).
 #include <benchmark/benchmark.h>
 
-#include "isentra/state.hpp"
-#include "isentra/transport.hpp"
+#include "isentra/properties/state.hpp"
+#include "isentra/properties/transport.hpp"
 
 namespace {
 

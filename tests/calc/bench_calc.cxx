@@ -35,8 +35,8 @@
 #include <com/sun/star/table/XCellRange.hpp>
 #include <rtl/ustring.hxx>
 
-#include "isentra/call.hpp"
-#include "isentra/catalogue.hpp"
+#include "isentra/surface/call.hpp"
+#include "isentra/surface/catalogue.hpp"
 #include "office.hxx"
 
 namespace isentra::calctest {

@@ -5,7 +5,7 @@
 #include <cmath>
 #include <string>
 
-#include "isentra/catalogue.hpp"
+#include "isentra/surface/catalogue.hpp"
 #include "office.hxx"
 
 namespace isentra::calctest {

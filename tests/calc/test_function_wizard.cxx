@@ -8,7 +8,7 @@
 #include <com/sun/star/lang/XServiceName.hpp>
 #include <com/sun/star/sheet/XAddIn.hpp>
 
-#include "isentra/catalogue.hpp"
+#include "isentra/surface/catalogue.hpp"
 #include "office.hxx"
 
 namespace isentra::calctest {

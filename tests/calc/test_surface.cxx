@@ -11,9 +11,9 @@
 #include <string>
 #include <vector>
 
-#include "isentra/call.hpp"
-#include "isentra/catalogue.hpp"
-#include "isentra/units.hpp"
+#include "isentra/surface/call.hpp"
+#include "isentra/surface/catalogue.hpp"
+#include "isentra/units/units.hpp"
 #include "office.hxx"
 
 namespace isentra::calctest {

@@ -23,7 +23,7 @@
 #include <com/sun/star/text/XTextRange.hpp>
 #include <rtl/ustring.hxx>
 
-#include "isentra/state.hpp"
+#include "isentra/properties/state.hpp"
 #include "office.hxx"
 
 namespace isentra::calctest {

@@ -25,10 +25,10 @@
 #include <com/sun/star/text/XTextRange.hpp>
 #include <rtl/ustring.hxx>
 
-#include "isentra/call.hpp"
-#include "isentra/catalogue.hpp"
-#include "isentra/equipment.hpp"
-#include "isentra/state.hpp"
+#include "isentra/surface/call.hpp"
+#include "isentra/surface/catalogue.hpp"
+#include "isentra/engineering/equipment.hpp"
+#include "isentra/properties/state.hpp"
 #include "office.hxx"
 
 namespace isentra::calctest {

@@ -16,8 +16,8 @@
 #include <string>
 #include <vector>
 
-#include "isentra/catalogue.hpp"
-#include "isentra/units.hpp"
+#include "isentra/surface/catalogue.hpp"
+#include "isentra/units/units.hpp"
 
 namespace {
 

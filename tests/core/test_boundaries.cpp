@@ -12,7 +12,7 @@
 #include <cmath>
 #include <cstdio>
 
-#include "isentra/if97.hpp"
+#include "isentra/if97/if97.hpp"
 
 namespace {
 

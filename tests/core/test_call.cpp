@@ -6,9 +6,9 @@
 #include <string>
 #include <vector>
 
-#include "isentra/call.hpp"
-#include "isentra/catalogue.hpp"
-#include "isentra/state.hpp"
+#include "isentra/surface/call.hpp"
+#include "isentra/surface/catalogue.hpp"
+#include "isentra/properties/state.hpp"
 
 namespace {
 

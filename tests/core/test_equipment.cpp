@@ -12,12 +12,12 @@
 #include <string>
 #include <vector>
 
-#include "isentra/call.hpp"
-#include "isentra/catalogue.hpp"
-#include "isentra/equipment.hpp"
-#include "isentra/error.hpp"
-#include "isentra/state.hpp"
-#include "isentra/units.hpp"
+#include "isentra/surface/call.hpp"
+#include "isentra/surface/catalogue.hpp"
+#include "isentra/engineering/equipment.hpp"
+#include "isentra/base/error.hpp"
+#include "isentra/properties/state.hpp"
+#include "isentra/units/units.hpp"
 
 using namespace isentra;
 namespace eq = isentra::equipment;

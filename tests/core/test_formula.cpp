@@ -8,7 +8,7 @@
 #include <cstdlib>
 #include <string>
 
-#include "isentra/formula.hpp"
+#include "isentra/surface/formula.hpp"
 
 using isentra::ErrorCode;
 using isentra::Table;

@@ -1,6 +1,6 @@
 // SPDX-License-Identifier: MPL-2.0
 // Tests of the IAPWS-IF97 region-3 backward equations and boundary equations
-// of SR3-03(2014) and SR4-04(2014) (core/src/if97_backward3.cpp).
+// of SR3-03(2014) and SR4-04(2014) (core/if97/backward3.cpp).
 //
 // The computer-program verification values were read on the rendered pages
 // of the releases (the text layer omits those tables). They are printed to
@@ -10,7 +10,7 @@
 
 #include <cmath>
 
-#include "isentra/if97.hpp"
+#include "isentra/if97/if97.hpp"
 
 namespace if97 = isentra::if97;
 

@@ -8,7 +8,7 @@
 #include <cmath>
 #include <functional>
 
-#include "isentra/if97.hpp"
+#include "isentra/if97/if97.hpp"
 
 namespace if97 = isentra::if97;
 

@@ -7,7 +7,7 @@
 #include <algorithm>
 #include <cmath>
 
-#include "isentra/if97.hpp"
+#include "isentra/if97/if97.hpp"
 
 namespace {
 
@@ -186,7 +186,7 @@ TEST(IF97Region3Sat, CriticalPointAndContinuityTowardsTc) {
         prev_l = s.liq.rho;
         prev_v = s.vap.rho;
         // The pressures agree with ps to 1e-10 even where the two roots have
-        // merged (within ~1e-5 K of Tc, see if97_r3sat.cpp).
+        // merged (within ~1e-5 K of Tc, see core/if97/r3sat.cpp).
         EXPECT_NEAR(s.liq.p, psat(Tc - dT), 1e-10 * pc);
         EXPECT_NEAR(s.vap.p, psat(Tc - dT), 1e-10 * pc);
     }

@@ -5,9 +5,9 @@
 
 #include <cmath>
 
-#include "isentra/if97.hpp"
+#include "isentra/if97/if97.hpp"
 
-// Internal to the core (core/src/if97_vpt.cpp); not part of if97.hpp.
+// Internal to the core (core/if97/vpt.cpp); not part of isentra/if97/if97.hpp.
 namespace isentra::if97::vpt_detail {
 double T3ab(double p);
 double T3cd(double p);

@@ -11,9 +11,9 @@
 
 #include <cmath>
 
-#include "isentra/error.hpp"
-#include "isentra/if97.hpp"
-#include "isentra/state.hpp"
+#include "isentra/base/error.hpp"
+#include "isentra/if97/if97.hpp"
+#include "isentra/properties/state.hpp"
 
 namespace {
 

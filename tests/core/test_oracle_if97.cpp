@@ -29,8 +29,8 @@
 #include <string>
 #include <vector>
 
-#include "isentra/error.hpp"
-#include "isentra/state.hpp"
+#include "isentra/base/error.hpp"
+#include "isentra/properties/state.hpp"
 
 namespace {
 

@@ -13,8 +13,8 @@
 #include <string>
 #include <vector>
 
-#include "isentra/call.hpp"
-#include "isentra/catalogue.hpp"
+#include "isentra/surface/call.hpp"
+#include "isentra/surface/catalogue.hpp"
 
 namespace {
 
@@ -89,7 +89,7 @@ TEST(Robustness, EveryFunctionAnyInput) {
 // against python3-iapws 1.5.2 (Debian), which itself gives negative cp for
 // saturated vapour within ~3e-5 K of Tc: there the region-3 saturated vapour
 // (or liquid) density has no root of Eq. 28 at ps(T) and sits on the
-// stability limit (see if97_r3sat.cpp), where cp is infinite.
+// stability limit (see core/if97/r3sat.cpp), where cp is infinite.
 // ---------------------------------------------------------------------------
 TEST(Robustness, DivergingPropertiesNearTheCriticalPoint) {
     namespace cat = isentra::catalogue;

@@ -22,9 +22,9 @@
 #include <string>
 #include <vector>
 
-#include "isentra/error.hpp"
-#include "isentra/if97.hpp"
-#include "isentra/state.hpp"
+#include "isentra/base/error.hpp"
+#include "isentra/if97/if97.hpp"
+#include "isentra/properties/state.hpp"
 
 namespace {
 
@@ -480,7 +480,7 @@ TEST(RoundTripSaturationEdge, PhaseJustOffTheLine) {
                 // (h,s) 1e-9 off the saturation line is only ~1e-13 relative in p
                 // from the dome along its isentrope (ds''/dp grows like
                 // 1/sqrt(pc - p)), inside the rounding of Eq. 28 against Eq. 30
-                // (if97_r3sat.cpp). At 22.06399 MPa, h''(1+1e-9) comes back as a
+                // (core/if97/r3sat.cpp). At 22.06399 MPa, h''(1+1e-9) comes back as a
                 // wet state at p 3.1e-12 MPa (1.4e-13 relative) higher that
                 // reproduces h and s to 4e-15: equally exact, so accepted there.
                 const bool ill_posed_ok =

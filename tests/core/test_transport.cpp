@@ -11,10 +11,10 @@
 #include <string>
 #include <vector>
 
-#include "isentra/error.hpp"
-#include "isentra/if97.hpp"
-#include "isentra/state.hpp"
-#include "isentra/transport.hpp"
+#include "isentra/base/error.hpp"
+#include "isentra/if97/if97.hpp"
+#include "isentra/properties/state.hpp"
+#include "isentra/properties/transport.hpp"
 
 using namespace isentra;
 

@@ -7,8 +7,8 @@
 #include <functional>
 #include <string>
 
-#include "isentra/error.hpp"
-#include "isentra/units.hpp"
+#include "isentra/base/error.hpp"
+#include "isentra/units/units.hpp"
 
 using isentra::Error;
 using isentra::ErrorCode;

@@ -7,7 +7,7 @@
 #include <cstdint>
 #include <string>
 
-#include "isentra/formula.hpp"
+#include "isentra/surface/formula.hpp"
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {
     std::string line(reinterpret_cast<const char*>(data), size);

@@ -1,0 +1,82 @@
+// SPDX-License-Identifier: MPL-2.0
+// The function catalogue: the single source of truth for every spreadsheet
+// function (display name, UNO method name, arguments, units, descriptions,
+// evaluation). The IDL, the add-in's dispatch, the Function Wizard texts, the
+// command-line tool and docs/functions.md are all generated from it.
+//
+// RULE: `name` and `method` are written into users' files. Once released they
+// never change. Add new functions; never rename or remove one.
+#pragma once
+
+#include <cstddef>
+#include <functional>
+#include <limits>
+#include <string>
+#include <string_view>
+#include <vector>
+
+#include "isentra/base/quantity.hpp"
+
+namespace isentra::units {
+class UnitSpec;
+}
+
+namespace isentra::catalogue {
+
+struct Arg {
+    std::string name;         // as shown in the Function Wizard, e.g. "p"
+    Quantity quantity;        // Quantity::Text for text arguments (units, names)
+    std::string description;  // e.g. "Pressure"; units are appended by describe_arg()
+    bool optional = false;    // only trailing arguments may be optional
+    bool varargs = false;     // the last argument takes all remaining values (UNO sequence<any>)
+    // Value of an omitted optional numeric argument, in core units (NaN: none,
+    // the argument must be given).
+    double default_value = std::numeric_limits<double>::quiet_NaN();
+};
+
+enum class ResultKind {
+    Number,  // one number per state (broadcast over ranges)
+    Row,     // a row of numbers for one state (optional header rows of names and units)
+    Text     // a text (e.g. STEAM.EXPLAIN, STEAM.VERSION)
+};
+
+struct Function;
+
+// Numeric evaluation: a[] holds the numeric arguments in core units (text
+// arguments are not included), `out` receives the result(s) in core units.
+// For ResultKind::Number, out[0]; for Row, out[0..row_len). Throws isentra::Error.
+using Eval = std::function<void(const double* a, double* out)>;
+// The same for the few functions whose meaning depends on the units given
+// (e.g. an uncertainty as a fraction of a gauge reading).
+using EvalUnits = std::function<void(const double* a, double* out, const units::UnitSpec& spec)>;
+
+struct Function {
+    std::string name;      // display name, e.g. "STEAM.H.PT"
+    std::string method;    // UNO method name, e.g. "hPT" (frozen once released)
+    std::string category;  // Function Wizard category
+    std::string summary;   // one sentence
+    std::vector<Arg> args;
+    Quantity result = Quantity::None;
+    ResultKind kind = ResultKind::Number;
+    Eval eval;
+    EvalUnits eval_units;  // if set, called instead of eval
+    // Row results: the column names and their quantities.
+    std::vector<std::string> row_names;
+    std::vector<Quantity> row_quantities;
+    bool has_units_arg() const;  // one argument is the optional "units" text
+    std::size_t units_index() const;  // its position; args.size() if there is none
+};
+
+const std::vector<Function>& functions();
+// Finds a function by display name (case-insensitive, with or without the
+// "STEAM." prefix) or by UNO method name. nullptr if unknown.
+const Function* find(std::string_view name);
+
+// Function Wizard texts. Descriptions state units under "SI" and "US".
+std::string describe_function(const Function& f);
+std::string describe_arg(const Function& f, std::size_t i);
+
+// The version of the add-in (project version).
+const char* version();
+
+}  // namespace isentra::catalogue

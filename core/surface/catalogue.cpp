@@ -1,0 +1,448 @@
+// SPDX-License-Identifier: MPL-2.0
+// The function catalogue. See catalogue.hpp for the rules: display names and
+// method names are frozen once released. The property and saturation
+// families are built from tables below; their order (and so the generated
+// IDL) is deterministic.
+#include "isentra/surface/catalogue.hpp"
+#include "catalogue_detail.hpp"
+
+#include <algorithm>
+#include <cctype>
+#include <cmath>
+#include <limits>
+
+#include "isentra/base/error.hpp"
+#include "isentra/properties/state.hpp"
+#include "isentra/properties/transport.hpp"
+#include "isentra/units/units.hpp"
+
+#ifndef ISENTRA_VERSION
+#define ISENTRA_VERSION "0.0.0"
+#endif
+
+namespace isentra::catalogue {
+
+namespace {
+
+constexpr double nan_v = std::numeric_limits<double>::quiet_NaN();
+
+// ---- Input pairs ---------------------------------------------------------
+
+struct InputSpec {
+    const char* code;  // "P", "T", "H", "S", "X"
+    const char* arg;   // argument name shown to the user
+    Quantity q;
+    const char* description;
+};
+
+const InputSpec in_p{"P", "p", Quantity::Pressure, "Pressure (absolute unless a gauge unit is chosen)"};
+const InputSpec in_T{"T", "T", Quantity::Temperature, "Temperature"};
+const InputSpec in_h{"H", "h", Quantity::SpecificEnergy, "Specific enthalpy"};
+const InputSpec in_s{"S", "s", Quantity::SpecificEntropy, "Specific entropy"};
+const InputSpec in_x{"X", "x", Quantity::None,
+                     "Vapour quality (mass fraction of vapour), 0 = saturated liquid, 1 = saturated vapour"};
+
+struct PairSpec {
+    const char* code;  // "PT"
+    const InputSpec* a;
+    const InputSpec* b;
+    State (*solve)(double, double);
+    const char* words;  // "pressure and temperature"
+};
+
+const PairSpec pairs[] = {
+    {"PT", &in_p, &in_T, &state_pT, "pressure and temperature"},
+    {"PH", &in_p, &in_h, &state_ph, "pressure and specific enthalpy"},
+    {"PS", &in_p, &in_s, &state_ps, "pressure and specific entropy"},
+    {"HS", &in_h, &in_s, &state_hs, "specific enthalpy and specific entropy"},
+    {"PX", &in_p, &in_x, &state_px, "pressure and vapour quality"},
+    {"TX", &in_T, &in_x, &state_Tx, "temperature and vapour quality"},
+};
+
+// ---- Properties ------------------------------------------------------------
+
+enum class Prop { T, P, H, S, U, V, RHO, CP, CV, W, KAPPA, X, MU, LAMBDA, NU, ALPHA, PR };
+
+struct PropSpec {
+    Prop prop;
+    const char* code;    // display code, "H"
+    const char* method;  // method stem, "h"
+    Quantity q;
+    const char* noun;    // "specific enthalpy"
+    bool transport;
+};
+
+const PropSpec props[] = {
+    {Prop::T, "T", "t", Quantity::Temperature, "temperature", false},
+    {Prop::P, "P", "p", Quantity::Pressure, "pressure", false},
+    {Prop::H, "H", "h", Quantity::SpecificEnergy, "specific enthalpy", false},
+    {Prop::S, "S", "s", Quantity::SpecificEntropy, "specific entropy", false},
+    {Prop::U, "U", "u", Quantity::SpecificEnergy, "specific internal energy", false},
+    {Prop::V, "V", "v", Quantity::SpecificVolume, "specific volume", false},
+    {Prop::RHO, "RHO", "rho", Quantity::Density, "density", false},
+    {Prop::CP, "CP", "cp", Quantity::SpecificEntropy, "specific isobaric heat capacity", false},
+    {Prop::CV, "CV", "cv", Quantity::SpecificEntropy, "specific isochoric heat capacity", false},
+    {Prop::W, "W", "w", Quantity::Speed, "speed of sound", false},
+    {Prop::KAPPA, "KAPPA", "kappa", Quantity::None,
+     "isentropic exponent (-v/p (dp/dv)s = w^2 rho / p)", false},
+    {Prop::X, "X", "x", Quantity::None, "vapour quality", false},
+    {Prop::MU, "MU", "mu", Quantity::DynamicViscosity, "dynamic viscosity (IAPWS R12-08)", true},
+    {Prop::LAMBDA, "LAMBDA", "lambda", Quantity::ThermalConductivity,
+     "thermal conductivity (IAPWS R15-11, industrial form)", true},
+    {Prop::NU, "NU", "nu", Quantity::KinematicViscosity, "kinematic viscosity (mu/rho)", true},
+    {Prop::ALPHA, "ALPHA", "alpha", Quantity::ThermalDiffusivity,
+     "thermal diffusivity (lambda/(rho cp))", true},
+    {Prop::PR, "PR", "pr", Quantity::None, "Prandtl number (mu cp/lambda)", true},
+};
+
+[[noreturn]] void not_in_dome(const char* what) {
+    throw Error(ErrorCode::NotDefined,
+                std::string(what) +
+                    " is not defined for a wet (two-phase) state; use the saturated-liquid (F) or "
+                    "saturated-vapour (G) function, e.g. STEAM.CPF.P or STEAM.CPG.P");
+}
+
+double single_phase(const State& st, double value, const char* what) {
+    if (st.phase == Phase::TwoPhase && !(st.x == 0.0 || st.x == 1.0)) not_in_dome(what);
+    if (critical_singularity(st.T, st.p, st.drhodp_T) || !std::isfinite(value))
+        throw critical_singularity_error(std::string(what) + " is");
+    return value;
+}
+
+double get(const State& st, Prop p) {
+    switch (p) {
+    case Prop::T: return st.T;
+    case Prop::P: return st.p;
+    case Prop::H: return st.h;
+    case Prop::S: return st.s;
+    case Prop::U: return st.u;
+    case Prop::V: return st.v;
+    case Prop::RHO: return st.rho;
+    case Prop::CP: return single_phase(st, st.cp, "cp");
+    case Prop::CV: return single_phase(st, st.cv, "cv");
+    case Prop::W: return single_phase(st, st.w, "The speed of sound");
+    case Prop::KAPPA: return single_phase(st, st.kappa, "The isentropic exponent");
+    case Prop::X: return quality(st);
+    case Prop::MU: return viscosity(st);
+    case Prop::LAMBDA: return conductivity(st);
+    case Prop::NU: return kinematic_viscosity(st);
+    case Prop::ALPHA: return thermal_diffusivity(st);
+    case Prop::PR: return prandtl(st);
+    }
+    return nan_v;
+}
+
+// Saturated-liquid or -vapour State from a saturation State (x = 0 one).
+State side_state(const State& sat, bool vapour) { return with_quality(sat, vapour ? 1.0 : 0.0); }
+
+double sat_get(const State& sat, Prop p, int side /*0 f, 1 g, 2 fg*/) {
+    if (side == 2) return get(side_state(sat, true), p) - get(side_state(sat, false), p);
+    // At the critical point cp, cv, w, kappa and the transport properties are
+    // errors (critical_singularity): the saturated states there carry an
+    // infinite (d rho/d p)_T.
+    return get(side_state(sat, side == 1), p);
+}
+
+std::string lower(std::string s) {
+    for (auto& c : s) c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+    return s;
+}
+
+}  // namespace
+
+Arg detail::units_arg() {
+    return Arg{"units", Quantity::Text,
+               "Optional unit system for all inputs and the result: \"SI\" (default: MPa, degC, kJ/kg), "
+               "\"US\" (psia, degF, Btu/lbm), \"BAR\", \"KPA\", \"K\"; single quantities can be "
+               "overridden, e.g. \"US p=psig\" or \"SI p=barg patm=0.0985MPa\". May be a cell reference.",
+               true};
+}
+
+namespace {
+using detail::units_arg;
+
+const char* const error_hint =
+    " An invalid input gives an error value; =STEAM.EXPLAIN(\"<name>\"; same arguments) shows why, in "
+    "your units.";
+
+void add_property_family(std::vector<Function>& out) {
+    for (const PairSpec& pair : pairs) {
+        for (const PropSpec& ps : props) {
+            // The inputs themselves are not offered as properties of their own pair.
+            if (ps.code == std::string(pair.a->code) || ps.code == std::string(pair.b->code)) continue;
+            Function f;
+            f.name = std::string("STEAM.") + ps.code + "." + pair.code;
+            f.method = std::string(ps.method) + pair.code;
+            f.category = ps.transport ? "Steam transport properties" : "Steam properties";
+            std::string noun = ps.noun;
+            noun[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(noun[0])));
+            f.summary = noun + " of water or steam from " + pair.words + " (IAPWS-IF97).";
+            if (ps.prop == Prop::X)
+                f.summary +=
+                    " Inside the wet region 0..1; outside it, below the critical pressure, the "
+                    "equilibrium quality (h - hf)/(hg - hf): below 0 for subcooled liquid, above 1 for "
+                    "superheated steam; an error above the critical pressure.";
+            if (ps.prop == Prop::CP || ps.prop == Prop::CV || ps.prop == Prop::W ||
+                ps.prop == Prop::KAPPA || ps.transport)
+                f.summary += " Not defined for a wet mixture: use the F (liquid) or G (vapour) function.";
+            if (ps.transport)
+                f.summary += " Range: 0 to 900 °C (32 to 1652 °F), up to 50 MPa (7252 psia) above 800 °C, "
+                             "the range of the IAPWS transport releases.";
+            f.args = {Arg{pair.a->arg, pair.a->q, pair.a->description},
+                      Arg{pair.b->arg, pair.b->q, pair.b->description}, units_arg()};
+            f.result = ps.q;
+            const Prop prop = ps.prop;
+            auto solve = pair.solve;
+            f.eval = [prop, solve](const double* a, double* o) { o[0] = get(solve(a[0], a[1]), prop); };
+            out.push_back(std::move(f));
+        }
+    }
+}
+
+// Saturation functions: STEAM.HF.P(p), STEAM.HG.T(T), STEAM.HFG.P(p), ...
+void add_saturation_family(std::vector<Function>& out) {
+    struct SatProp {
+        Prop prop;
+        bool fg;  // offer the difference g - f
+    };
+    const SatProp sat_props[] = {{Prop::H, true},    {Prop::S, true},      {Prop::U, true},
+                                 {Prop::V, true},    {Prop::RHO, false},   {Prop::CP, false},
+                                 {Prop::CV, false},  {Prop::W, false},     {Prop::MU, false},
+                                 {Prop::LAMBDA, false}, {Prop::NU, false}, {Prop::PR, false}};
+    const char* side_code[3] = {"F", "G", "FG"};
+    const char* side_words[3] = {"saturated liquid", "saturated vapour",
+                                 "the difference saturated vapour minus saturated liquid of the"};
+    for (const SatProp& sp : sat_props) {
+        const PropSpec& ps = *std::find_if(std::begin(props), std::end(props),
+                                           [&](const PropSpec& x) { return x.prop == sp.prop; });
+        for (int side = 0; side < 3; ++side) {
+            if (side == 2 && !sp.fg) continue;
+            for (int by = 0; by < 2; ++by) {  // 0: by pressure, 1: by temperature
+                Function f;
+                const char* in = by == 0 ? "P" : "T";
+                f.name = std::string("STEAM.") + ps.code + side_code[side] + "." + in;
+                f.method = std::string(ps.method) + lower(side_code[side]) + in;
+                f.category = ps.transport ? "Steam transport properties" : "Steam saturation";
+                f.summary = std::string(side == 2 ? "The difference (saturated vapour minus saturated "
+                                                    "liquid) of the "
+                                                  : "") +
+                            (side == 2 ? std::string(ps.noun) : std::string(ps.noun)) +
+                            (side == 2 ? "" : std::string(" of ") + side_words[side]) +
+                            (by == 0 ? " at saturation pressure p" : " at saturation temperature T") +
+                            " (IAPWS-IF97 region 4).";
+                f.summary[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(f.summary[0])));
+                if (by == 0)
+                    f.args = {Arg{"p", Quantity::Pressure,
+                                  "Saturation pressure, from the triple point (611.657 Pa) to the critical "
+                                  "pressure (22.064 MPa)"},
+                              units_arg()};
+                else
+                    f.args = {Arg{"T", Quantity::Temperature,
+                                  "Saturation temperature, from 273.15 K (0 degC) to the critical "
+                                  "temperature (647.096 K)"},
+                              units_arg()};
+                f.result = ps.q;
+                const Prop prop = sp.prop;
+                if (by == 0)
+                    f.eval = [prop, side](const double* a, double* o) {
+                        o[0] = sat_get(saturation_p(a[0]), prop, side);
+                    };
+                else
+                    f.eval = [prop, side](const double* a, double* o) {
+                        o[0] = sat_get(saturation_T(a[0]), prop, side);
+                    };
+                out.push_back(std::move(f));
+            }
+        }
+    }
+}
+
+// Whole state as a row.
+const Prop state_row[] = {Prop::P,  Prop::T, Prop::H,     Prop::S, Prop::U,  Prop::V,
+                          Prop::RHO, Prop::CP, Prop::CV,  Prop::W, Prop::KAPPA, Prop::X};
+
+void add_state_family(std::vector<Function>& out) {
+    for (const PairSpec& pair : pairs) {
+        Function f;
+        f.name = std::string("STEAM.STATE.") + pair.code;
+        f.method = std::string("state") + pair.code;
+        f.category = "Steam properties";
+        f.summary = std::string("The whole state from ") + pair.words +
+                    " as one row: p, T, h, s, u, v, rho, cp, cv, w, kappa, x, region. Enter as an "
+                    "array formula over 13 cells (more rows for a range of inputs); with header = 1 "
+                    "the first row holds the names and units.";
+        f.args = {Arg{pair.a->arg, pair.a->q, pair.a->description},
+                  Arg{pair.b->arg, pair.b->q, pair.b->description}, units_arg(),
+                  Arg{"header", Quantity::None,
+                      "Optional: 1 (or TRUE) puts a row of names and units above the values; default 0",
+                      true}};
+        f.kind = ResultKind::Row;
+        for (Prop p : state_row) {
+            const PropSpec& ps = *std::find_if(std::begin(props), std::end(props),
+                                               [&](const PropSpec& x) { return x.prop == p; });
+            f.row_names.push_back(lower(ps.code));
+            f.row_quantities.push_back(ps.q);
+        }
+        f.row_names.push_back("region");
+        f.row_quantities.push_back(Quantity::None);
+        auto solve = pair.solve;
+        f.eval = [solve](const double* a, double* o) {
+            const State st = solve(a[0], a[1]);
+            std::size_t i = 0;
+            for (Prop p : state_row) {
+                double v;
+                try {
+                    v = get(st, p);
+                } catch (const Error&) {
+                    v = nan_v;  // shown as an error element; the rest of the row stands
+                }
+                o[i++] = v;
+            }
+            o[i] = st.region;
+        };
+        out.push_back(std::move(f));
+    }
+}
+
+std::vector<Function> build() {
+    std::vector<Function> out;
+    {
+        Function f;
+        f.name = "STEAM.TSAT";
+        f.method = "tsat";
+        f.category = "Steam saturation";
+        f.summary = "Saturation temperature at pressure p (IAPWS-IF97 region 4, R7-97(2012) Eq. 31).";
+        f.args = {Arg{"p", Quantity::Pressure,
+                      "Pressure, from the triple point (611.657 Pa) to the critical pressure (22.064 MPa)"},
+                  units_arg()};
+        f.result = Quantity::Temperature;
+        f.eval = [](const double* a, double* o) { o[0] = saturation_temperature(a[0]); };
+        out.push_back(std::move(f));
+    }
+    {
+        Function f;
+        f.name = "STEAM.PSAT";
+        f.method = "psat";
+        f.category = "Steam saturation";
+        f.summary = "Saturation pressure at temperature T (IAPWS-IF97 region 4, R7-97(2012) Eq. 30).";
+        f.args = {Arg{"T", Quantity::Temperature,
+                      "Temperature, from 273.15 K (0 degC) to the critical temperature (647.096 K)"},
+                  units_arg()};
+        f.result = Quantity::Pressure;
+        f.eval = [](const double* a, double* o) { o[0] = saturation_pressure(a[0]); };
+        out.push_back(std::move(f));
+    }
+    add_saturation_family(out);
+    {
+        Function f;
+        f.name = "STEAM.SIGMA.T";
+        f.method = "sigmaT";
+        f.category = "Steam transport properties";
+        f.summary = "Surface tension of water against its vapour at saturation temperature T "
+                    "(IAPWS R1-76(2014)).";
+        f.args = {Arg{"T", Quantity::Temperature,
+                      "Saturation temperature, from the triple point 273.16 K to 647.096 K"},
+                  units_arg()};
+        f.result = Quantity::SurfaceTension;
+        f.eval = [](const double* a, double* o) { o[0] = surface_tension(a[0]); };
+        out.push_back(std::move(f));
+    }
+    add_property_family(out);
+    add_state_family(out);
+    detail::add_equipment_family(out);
+    {
+        Function f;
+        f.name = "STEAM.CONVERT";
+        f.method = "convert";
+        f.category = "Steam utilities";
+        f.summary = "Converts a value between two units of the same kind, e.g. "
+                    "STEAM.CONVERT(150; \"psig\"; \"MPa\"). Gauge pressures are relative to the standard "
+                    "atmosphere (101.325 kPa) unless the unit text gives the local one, e.g. \"psig patm=14.2psia\"; "
+                    "temperature differences use delta units (\"delta_K\", \"delta_degF\").";
+        f.args = {Arg{"value", Quantity::None, "The value to convert, in unit 'from'"},
+                  Arg{"from", Quantity::Text, "Unit of the value, e.g. \"psig\", \"degF\", \"Btu/lbm\""},
+                  Arg{"to", Quantity::Text, "Unit wanted, e.g. \"MPa\", \"degC\", \"kJ/kg\""}};
+        f.kind = ResultKind::Number;
+        out.push_back(std::move(f));  // evaluated specially by call()
+    }
+    {
+        Function f;
+        f.name = "STEAM.EXPLAIN";
+        f.method = "explain";
+        f.category = "Steam utilities";
+        f.summary = "Explains, in one sentence and in your units, why a call of another STEAM function "
+                    "gives an error: =STEAM.EXPLAIN(\"H.PT\"; A2; B2; \"US\") repeats the call "
+                    "STEAM.H.PT(A2; B2; \"US\") and returns its error sentence, or \"OK\" and the value.";
+        f.args = {Arg{"function", Quantity::Text, "Name of the function, e.g. \"H.PT\" or \"STEAM.H.PT\""},
+                  Arg{"arguments", Quantity::None,
+                      "The same arguments as in the call being explained, in the same order and units",
+                      false, true}};
+        f.kind = ResultKind::Text;
+        out.push_back(std::move(f));
+    }
+    {
+        Function f;
+        f.name = "STEAM.VERSION";
+        f.method = "version";
+        f.category = "Steam utilities";
+        f.summary = "The version of the Isentra add-in, e.g. for a workbook's audit trail.";
+        f.kind = ResultKind::Text;
+        out.push_back(std::move(f));
+    }
+    return out;
+}
+
+std::string unit_pair(Quantity q) {
+    if (q == Quantity::None || q == Quantity::Text) return "";
+    std::string si = units::symbol(q, "SI"), us = units::symbol(q, "US");
+    return " SI: " + si + "; US: " + us + ".";
+}
+
+}  // namespace
+
+std::size_t Function::units_index() const {
+    for (std::size_t i = 0; i < args.size(); ++i)
+        if (args[i].name == "units" && args[i].quantity == Quantity::Text) return i;
+    return args.size();
+}
+
+bool Function::has_units_arg() const { return units_index() < args.size(); }
+
+const std::vector<Function>& functions() {
+    static const std::vector<Function> all = build();  // built once, immutable afterwards
+    return all;
+}
+
+const Function* find(std::string_view name) {
+    std::string n = lower(std::string(name));
+    if (n.rfind("steam.", 0) != 0) n = "steam." + n;
+    for (const Function& f : functions())
+        if (lower(f.name) == n) return &f;
+    std::string m = lower(std::string(name));
+    for (const Function& f : functions())
+        if (lower(f.method) == m) return &f;
+    return nullptr;
+}
+
+std::string describe_function(const Function& f) {
+    std::string d = f.summary;
+    if (f.kind == ResultKind::Number && f.result != Quantity::None) d += " Result" + unit_pair(f.result);
+    if (f.name != "STEAM.EXPLAIN" && f.name != "STEAM.VERSION") {
+        std::string hint = error_hint;
+        const std::string key = "<name>";
+        hint.replace(hint.find(key), key.size(), f.name.substr(6));
+        d += hint;
+    }
+    return d;
+}
+
+std::string describe_arg(const Function& f, std::size_t i) {
+    const Arg& a = f.args.at(i);
+    std::string d = a.description;
+    if (d.empty() || d.back() != '.') d += ".";
+    return d + unit_pair(a.quantity);
+}
+
+const char* version() { return ISENTRA_VERSION; }
+
+}  // namespace isentra::catalogue
