@@ -37,7 +37,7 @@
 
 #include "isentra/surface/call.hpp"
 #include "isentra/surface/catalogue.hpp"
-#include "office.hxx"
+#include "calc_test.hxx"
 
 namespace isentra::calctest {
 namespace {

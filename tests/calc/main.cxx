@@ -1,9 +1,9 @@
 // SPDX-License-Identifier: MPL-2.0
 // calc_tests: GoogleTest cases that run in a headless LibreOffice Calc with
-// the freshly built extension. One office serves the whole run (office.hxx).
+// the freshly built extension. One office serves the whole run (office/office.hxx).
 #include <gtest/gtest.h>
 
-#include "office.hxx"
+#include "calc_test.hxx"
 
 namespace {
 

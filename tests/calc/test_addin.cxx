@@ -6,7 +6,7 @@
 #include <string>
 
 #include "isentra/surface/catalogue.hpp"
-#include "office.hxx"
+#include "calc_test.hxx"
 
 namespace isentra::calctest {
 namespace {

@@ -9,7 +9,7 @@
 #include <com/sun/star/sheet/XAddIn.hpp>
 
 #include "isentra/surface/catalogue.hpp"
-#include "office.hxx"
+#include "calc_test.hxx"
 
 namespace isentra::calctest {
 namespace {

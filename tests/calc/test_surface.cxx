@@ -14,7 +14,7 @@
 #include "isentra/surface/call.hpp"
 #include "isentra/surface/catalogue.hpp"
 #include "isentra/units/units.hpp"
-#include "office.hxx"
+#include "calc_test.hxx"
 
 namespace isentra::calctest {
 namespace {

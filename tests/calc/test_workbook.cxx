@@ -24,7 +24,7 @@
 #include <rtl/ustring.hxx>
 
 #include "isentra/properties/state.hpp"
-#include "office.hxx"
+#include "calc_test.hxx"
 
 namespace isentra::calctest {
 namespace {

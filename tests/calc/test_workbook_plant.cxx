@@ -29,7 +29,7 @@
 #include "isentra/surface/catalogue.hpp"
 #include "isentra/engineering/equipment.hpp"
 #include "isentra/properties/state.hpp"
-#include "office.hxx"
+#include "calc_test.hxx"
 
 namespace isentra::calctest {
 namespace {

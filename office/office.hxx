@@ -1,5 +1,7 @@
 // SPDX-License-Identifier: MPL-2.0
-// Headless LibreOffice Calc for integration tests.
+// The headless-office harness (library isentra_office): a private LibreOffice
+// with the freshly built Isentra extension, driven over UNO. Used by the Calc
+// tests (tests/calc), calc_bench and the tools.
 //
 // Office::get() starts, on first use, one private office for the whole test
 // binary: it makes a throwaway profile, installs the freshly built .oxt into
@@ -12,22 +14,22 @@
 // As root (CI), unopkg refuses per-user installs, so unopkg and soffice run
 // as the unprivileged user `nobody` (setpriv) with the profile owned by it.
 //
-// Tests use CalcTest (below): each test gets a new, empty, hidden Calc
-// document and helpers to type formulas and read results back.
+// The Calc tests use the GoogleTest fixture CalcTest (tests/calc/calc_test.hxx)
+// on top of this.
 #pragma once
 
 #include <string>
 #include <vector>
 
-#include <gtest/gtest.h>
-
 #include <com/sun/star/lang/XComponent.hpp>
 #include <com/sun/star/sheet/XSpreadsheet.hpp>
 #include <com/sun/star/table/XCell.hpp>
 #include <com/sun/star/uno/Reference.hxx>
+#include <com/sun/star/uno/Exception.hpp>
 #include <com/sun/star/uno/XComponentContext.hpp>
+#include <rtl/ustring.hxx>
 
-namespace isentra::calctest {
+namespace isentra::office {
 
 namespace css = ::com::sun::star;
 
@@ -42,6 +44,11 @@ enum CalcError : int {
     NoName = 525,            // #NAME? (unknown function)
     NotAvailable = 32767     // #N/A
 };
+
+// UTF-8 <-> UNO strings, and a UNO exception as a sentence ("message (type)").
+rtl::OUString ou(const std::string& s);
+std::string str(const rtl::OUString& s);
+std::string message(const css::uno::Exception& e);
 
 class Office {
 public:
@@ -72,29 +79,4 @@ private:
     css::uno::Reference<css::uno::XComponentContext> remote_;
 };
 
-// Fixture: one new Calc document per test in the shared office.
-class CalcTest : public ::testing::Test {
-protected:
-    void SetUp() override;
-    void TearDown() override;
-
-    // Cell input, A1-style addresses on the first sheet.
-    void formula(const std::string& cell, const std::string& f);  // e.g. "=STEAM.TSAT(0.1)"
-    void number(const std::string& cell, double v);
-    void text(const std::string& cell, const std::string& s);
-    void array_formula(const std::string& range, const std::string& f);  // e.g. "B1:B4"
-    void recalc();  // recalculates everything (calculateAll)
-
-    // Results.
-    double value(const std::string& cell);
-    int error(const std::string& cell);  // CalcError, 0 if none
-    std::string string(const std::string& cell);  // as displayed
-    std::string formula_of(const std::string& cell);
-
-    css::uno::Reference<css::table::XCell> cell(const std::string& address);
-
-    css::uno::Reference<css::lang::XComponent> doc_;
-    css::uno::Reference<css::sheet::XSpreadsheet> sheet_;
-};
-
-}  // namespace isentra::calctest
+}  // namespace isentra::office

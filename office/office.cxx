@@ -51,7 +51,7 @@
 #error "ISENTRA_UNO_INI must name the client's UNO bootstrap file"
 #endif
 
-namespace isentra::calctest {
+namespace isentra::office {
 
 namespace fs = std::filesystem;
 using css::uno::Reference;
@@ -59,16 +59,26 @@ using css::uno::UNO_QUERY;
 using css::uno::UNO_QUERY_THROW;
 using rtl::OUString;
 
-namespace {
-
-constexpr uid_t unprivileged_id = 65534;  // nobody / nogroup on Debian
-
 OUString ou(const std::string& s) { return OUString(s.data(), static_cast<sal_Int32>(s.size()), RTL_TEXTENCODING_UTF8); }
 
 std::string str(const OUString& s) {
     const rtl::OString o = rtl::OUStringToOString(s, RTL_TEXTENCODING_UTF8);
     return std::string(o.getStr(), static_cast<std::size_t>(o.getLength()));
 }
+
+std::string message(const css::uno::Exception& e) {
+    int status = 0;
+    char* name = abi::__cxa_demangle(typeid(e).name(), nullptr, nullptr, &status);
+    const std::string type = name ? name : typeid(e).name();
+    std::free(name);
+    return str(e.Message) + " (" + type + ")";
+}
+
+namespace {
+
+constexpr uid_t unprivileged_id = 65534;  // nobody / nogroup on Debian
+
+
 
 std::string read_file(const std::string& path, std::size_t max = 4000) {
     std::ifstream in(path, std::ios::binary);
@@ -162,13 +172,6 @@ Reference<css::uno::XComponentContext> local_context() {
     return ctx;
 }
 
-std::string message(const css::uno::Exception& e) {
-    int status = 0;
-    char* name = abi::__cxa_demangle(typeid(e).name(), nullptr, nullptr, &status);
-    const std::string type = name ? name : typeid(e).name();
-    std::free(name);
-    return str(e.Message) + " (" + type + ")";
-}
 
 std::unique_ptr<Office>& instance() {
     static std::unique_ptr<Office> office;
@@ -352,7 +355,7 @@ void Office::stop() {
     if (!dir_.empty()) {
         std::error_code ec;
         if (std::getenv("ISENTRA_KEEP_PROFILE"))
-            std::fprintf(stderr, "calc_tests: keeping %s\n", dir_.c_str());
+            std::fprintf(stderr, "isentra office: keeping %s\n", dir_.c_str());
         else
             fs::remove_all(dir_, ec);
         dir_.clear();
@@ -379,90 +382,4 @@ void Office::close(const Reference<css::lang::XComponent>& doc) {
     else doc->dispose();
 }
 
-// ---- CalcTest -------------------------------------------------------------------
-
-namespace {
-
-// Runs f, turning UNO exceptions into test failures with their message.
-template <class F>
-auto guarded(const char* what, F f) -> decltype(f()) {
-    try {
-        return f();
-    } catch (const css::uno::Exception& e) {
-        throw std::runtime_error(std::string(what) + ": " + message(e));
-    }
-}
-
-}  // namespace
-
-void CalcTest::SetUp() {
-    try {
-        Office& office = Office::get();
-        doc_ = guarded("new Calc document", [&] { return office.new_calc_document(); });
-        Reference<css::sheet::XSpreadsheetDocument> sdoc(doc_, UNO_QUERY_THROW);
-        Reference<css::container::XIndexAccess> sheets(sdoc->getSheets(), UNO_QUERY_THROW);
-        sheet_.set(sheets->getByIndex(0), UNO_QUERY_THROW);
-    } catch (const std::exception& e) {
-        FAIL() << e.what();
-    } catch (const css::uno::Exception& e) {
-        FAIL() << message(e);
-    }
-}
-
-void CalcTest::TearDown() {
-    try {
-        Office::close(doc_);
-    } catch (...) {
-        ADD_FAILURE() << "closing the test document failed: is the office still alive?";
-    }
-    sheet_.clear();
-    doc_.clear();
-}
-
-Reference<css::table::XCell> CalcTest::cell(const std::string& address) {
-    return guarded(address.c_str(), [&] {
-        if (!sheet_.is()) throw std::runtime_error("no document (the office did not start)");
-        return sheet_->getCellRangeByName(ou(address))->getCellByPosition(0, 0);
-    });
-}
-
-void CalcTest::formula(const std::string& c, const std::string& f) {
-    guarded(f.c_str(), [&] { cell(c)->setFormula(ou(f)); });
-}
-
-void CalcTest::number(const std::string& c, double v) {
-    guarded(c.c_str(), [&] { cell(c)->setValue(v); });
-}
-
-void CalcTest::text(const std::string& c, const std::string& s) {
-    guarded(c.c_str(), [&] { Reference<css::text::XTextRange>(cell(c), UNO_QUERY_THROW)->setString(ou(s)); });
-}
-
-void CalcTest::array_formula(const std::string& range, const std::string& f) {
-    guarded(f.c_str(), [&] {
-        Reference<css::sheet::XArrayFormulaRange> r(sheet_->getCellRangeByName(ou(range)), UNO_QUERY_THROW);
-        r->setArrayFormula(ou(f));
-    });
-}
-
-void CalcTest::recalc() {
-    guarded("calculateAll", [&] { Reference<css::sheet::XCalculatable>(doc_, UNO_QUERY_THROW)->calculateAll(); });
-}
-
-double CalcTest::value(const std::string& c) {
-    return guarded(c.c_str(), [&] { return cell(c)->getValue(); });
-}
-
-int CalcTest::error(const std::string& c) {
-    return guarded(c.c_str(), [&] { return static_cast<int>(cell(c)->getError()); });
-}
-
-std::string CalcTest::string(const std::string& c) {
-    return guarded(c.c_str(), [&] { return str(Reference<css::text::XTextRange>(cell(c), UNO_QUERY_THROW)->getString()); });
-}
-
-std::string CalcTest::formula_of(const std::string& c) {
-    return guarded(c.c_str(), [&] { return str(cell(c)->getFormula()); });
-}
-
-}  // namespace isentra::calctest
+}  // namespace isentra::office
