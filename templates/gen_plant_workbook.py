@@ -354,14 +354,15 @@ def run_results(c):
         return ref(c, n)
     no_rh = f"AND(ISNUMBER({r(14)});{r(14)}=0)"
     base = f"AND(COUNT({r(9)};{r(19)};{r(27)};{r(28)})=4;OR({no_rh};COUNT({r(14)};{r(29)};{r(30)})=3))"
-    q_args = [r(9), r(27), r(28), r(14), f"IF(ISNUMBER({r(30)});{r(30)};0)", f"IF(ISNUMBER({r(29)});{r(29)};0)",
-              f"1000*{r(19)}"]
+    # STEAM.HEATRATE.CYCLE/NET: m_ms, h_fw, h_ms, P_gen[, P_aux, eta_boiler], m_rh, h_crh, h_hrh.
+    main = [r(9), r(28), r(27), f"1000*{r(19)}"]
+    rh = [r(14), f"IF(ISNUMBER({r(29)});{r(29)};0)", f"IF(ISNUMBER({r(30)});{r(30)};0)"]
     return [
         (27, "Main steam enthalpy", "h", "result_2", when(count_is(c, [10, 11]), call("HPT", r(10), r(11)))),
         (28, "Final feedwater enthalpy", "h", "result_2", when(count_is(c, [12, 13]), call("HPT", r(12), r(13)))),
         (29, "Cold reheat enthalpy", "h", "result_2", when(count_is(c, [15, 16]), call("HPT", r(15), r(16)))),
         (30, "Hot reheat enthalpy", "h", "result_2", when(count_is(c, [17, 18]), call("HPT", r(17), r(18)))),
-        (31, "Turbine cycle heat rate", "hr", "result_1", when(base, call("HEATRATECYCLE", *q_args))),
+        (31, "Turbine cycle heat rate", "hr", "result_1", when(base, call("HEATRATECYCLE", *main, *rh))),
         (32, "Cycle heat rate test - design", "%", "result_dpct",
          when(f"COUNT({r(31)};{r(22)})=2", f"{r(31)}/{r(22)}-1")),
         (33, "Heat added to the cycle (heat rate x gross output / 1 kWh)", "MW", "result_2",
@@ -372,7 +373,7 @@ def run_results(c):
          when(f"COUNT({r(19)};{r(20)})=2", f"{r(19)}-{r(20)}")),
         (36, "Net unit heat rate (fuel heat per net kWh)", "hr", "result_1",
          when(f"AND({base};COUNT({r(20)};{r(21)})=2)",
-              call("HEATRATENET", *q_args, f"1000*{r(20)}", r(21)))),
+              call("HEATRATENET", *main, f"1000*{r(20)}", r(21), *rh))),
         (37, "Net unit efficiency (1 kWh / net unit heat rate)", "%", "result_pct",
          when(f"ISNUMBER({r(36)})", f"{KWH}/{r(36)}")),
     ]

@@ -375,35 +375,9 @@ double baumann_dry(double eta_wet, double x_in, double x_out, double a) {
 
 // ---- Pump ----------------------------------------------------------------------------
 
-Pumping pump_pT(double p_in, double T_in, double p_out, double eta) {
-    check_eta("eta", eta, false, "the pump efficiency");
-    check_finite("p_in", Quantity::Pressure, p_in);
-    check_finite("T_in", Quantity::Temperature, T_in);
-    const Names n{"p_in", "T_in", "h_in", "s_in"};
-    double Ts = nan_v;
-    // Not subcooled water: a RangeError of kind Impossible on T_in, so that
-    // front ends word it in the user's units.
-    auto not_liquid = [&]() {
-        const bool sub = p_in < pc;
-        const double limit = sub ? if97::tsat(p_in) : Tc;
-        return RangeError("T_in", Quantity::Temperature, T_in, nan_v, limit,
-                          sub ? "(the saturation temperature at p_in: a pump takes subcooled water, colder than that)"
-                              : "(the critical temperature: above it the fluid at p_in is supercritical, "
-                                "not water)",
-                          ErrorCode::Impossible);
-    };
-    if (p_in > 0 && p_in <= if97::p_max && T_in >= if97::T_min && at_or_below_tsat(p_in, T_in, Ts) && T_in == Ts)
-        throw not_liquid();
-    State in;
-    try {
-        in = pT(p_in, T_in, n);
-    } catch (const RangeError&) {
-        throw;
-    } catch (const Error& e) {
-        if (e.code() != ErrorCode::Impossible) throw;
-        throw not_liquid();
-    }
-    if (in.phase != Phase::Liquid) throw not_liquid();
+namespace {
+// The pump proper from a liquid inlet state.
+Pumping pump_from(const State& in, double p_in, double p_out, double eta) {
     check_finite("p_out", Quantity::Pressure, p_out);
     if (p_out < p_in)
         throw RangeError("p_out", Quantity::Pressure, p_out, p_in, none,
@@ -420,6 +394,69 @@ Pumping pump_pT(double p_in, double T_in, double p_out, double eta) {
     r.T_out = out.T;
     r.s_out = out.s;
     return r;
+}
+}  // namespace
+
+Pumping pump_pT(double p_in, double T_in, double p_out, double eta) {
+    check_eta("eta", eta, false, "the pump efficiency");
+    check_finite("p_in", Quantity::Pressure, p_in);
+    check_finite("T_in", Quantity::Temperature, T_in);
+    const Names n{"p_in", "T_in", "h_in", "s_in"};
+    double Ts = nan_v;
+    // Not subcooled water: a RangeError of kind Impossible on T_in, so that
+    // front ends word it in the user's units. Exactly at Tsat(p_in), p and T
+    // do not tell saturated water from steam: the sentence points at the
+    // (p,h) form with the saturated-liquid enthalpy.
+    auto not_liquid = [&](bool on_line) {
+        const bool sub = p_in < pc;
+        const double limit = sub ? if97::tsat(p_in) : Tc;
+        return RangeError("T_in", Quantity::Temperature, T_in, nan_v, limit,
+                          on_line ? "(the saturation temperature at p_in: there p and T do not fix the state; for "
+                                    "saturated water use STEAM.PUMP.HOUT.PH with h_in = STEAM.HF.P(p_in))"
+                          : sub   ? "(the saturation temperature at p_in: a pump takes subcooled water, colder "
+                                    "than that)"
+                                  : "(the critical temperature: above it the fluid at p_in is supercritical, "
+                                    "not water)",
+                          ErrorCode::Impossible);
+    };
+    if (p_in > 0 && p_in <= if97::p_max && T_in >= if97::T_min && at_or_below_tsat(p_in, T_in, Ts) && T_in == Ts)
+        throw not_liquid(true);
+    State in;
+    try {
+        in = pT(p_in, T_in, n);
+    } catch (const RangeError&) {
+        throw;
+    } catch (const Error& e) {
+        if (e.code() != ErrorCode::Impossible) throw;
+        throw not_liquid(true);
+    }
+    if (in.phase != Phase::Liquid) throw not_liquid(false);
+    return pump_from(in, p_in, p_out, eta);
+}
+
+Pumping pump_ph(double p_in, double h_in, double p_out, double eta) {
+    check_eta("eta", eta, false, "the pump efficiency");
+    check_finite("p_in", Quantity::Pressure, p_in);
+    check_finite("h_in", Quantity::SpecificEnergy, h_in);
+    const State in = ph(p_in, h_in, Names{"p_in", "T_in", "h_in", "s_in"});
+    if (in.phase == Phase::Liquid) return pump_from(in, p_in, p_out, eta);
+    if (p_in < pc) {
+        // Saturated water (x = 0) is a pump's usual inlet (condensate from a
+        // hotwell, water from a deaerator). A value that went through a unit
+        // conversion may sit a few ulps above h': within 1e-9 relative it
+        // counts as saturated liquid.
+        const State sat = saturation_p(p_in);
+        if (h_in <= sat.liq.h + 1e-9 * std::max(1.0, std::fabs(sat.liq.h)))
+            return pump_from(with_quality(sat, 0.0), p_in, p_out, eta);
+        throw RangeError("h_in", Quantity::SpecificEnergy, h_in, nan_v, sat.liq.h,
+                         "(the saturated-liquid enthalpy at p_in: above it the inlet holds steam, and a pump takes "
+                         "water)",
+                         ErrorCode::Impossible);
+    }
+    throw RangeError("h_in", Quantity::SpecificEnergy, h_in, nan_v, liquid_limit_h(p_in),
+                     "(the enthalpy at p_in and the critical temperature: above it the fluid is supercritical, not "
+                     "water)",
+                     ErrorCode::Impossible);
 }
 
 // ---- Valve ------------------------------------------------------------------------

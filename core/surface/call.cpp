@@ -161,10 +161,7 @@ Table call(const Function& f, const std::vector<Table>& args) {
         std::vector<std::size_t> numeric;  // indices of the state's numeric arguments
         for (std::size_t i = 0; i < f.args.size(); ++i) {
             if (f.args[i].quantity == Quantity::Text) continue;
-            if (i >= args.size()) {  // omitted optional argument
-                if (f.args[i].name != "header" && std::isnan(f.args[i].default_value))
-                    return error_table(Value::of_error(ErrorCode::InvalidArgument,
-                                                       "the argument " + f.args[i].name + " is missing"));
+            if (i >= args.size()) {  // omitted optional argument: its default (NaN: the function decides)
                 if (f.args[i].name != "header") numeric.push_back(i);
                 continue;
             }
@@ -240,7 +237,8 @@ Table call(const Function& f, const std::vector<Table>& args) {
                     }
                     a[j] = spec.to_core(spec_arg.quantity, v.number);
                 } else if (v.kind == Value::Kind::Empty) {
-                    if (is_scalar(t) && !std::isnan(spec_arg.default_value)) {  // left blank: default
+                    if (is_scalar(t) && (spec_arg.optional || !std::isnan(spec_arg.default_value))) {
+                        // left out between other arguments (";;"): its default
                         a[j] = spec_arg.default_value;
                         continue;
                     }

@@ -11,6 +11,7 @@
 // same words in camelCase. Names and methods are frozen once released.
 #include "catalogue_detail.hpp"
 
+#include <cmath>
 #include <string>
 #include <utility>
 
@@ -302,49 +303,67 @@ void add_section_efficiency(std::vector<Function>& out) {
 // ---- Pump and valve ---------------------------------------------------------------------------
 
 void add_pump(std::vector<Function>& out) {
-    auto args = []() {
-        return std::vector<Arg>{
-            p_in(), T_arg("T_in", "Inlet temperature (subcooled water)"), p_out(),
-            Arg{"eta", Quantity::None,
-                "Pump isentropic efficiency as a fraction, above 0 to 1 (0.80 for 80 %): (h_s - h_in)/(h_out - h_in)"}};
+    struct P {
+        const char* code;
+        Arg second;
+        const char* words;
+        const char* inlet;
+        eq::Pumping (*fn)(double, double, double, double);
     };
-    const std::string defn =
-        " Work (h_s - h_in)/eta, h_s = h(p_out, s_in); the inlet must be subcooled water.";
-    out.push_back(row("STEAM.PUMP.OUTLET.PT", "pumpOutletPT", cat_equipment,
-                      "Pump outlet state and specific work from inlet pressure and temperature, outlet pressure "
-                      "and efficiency, as one row: h_out, T_out, s_out, h_s, work." +
-                          defn +
-                          " Enter as an array formula over 5 cells; with header = 1 the first row holds the names "
-                          "and units.",
-                      args(),
-                      {{"h_out", Quantity::SpecificEnergy},
-                       {"T_out", Quantity::Temperature},
-                       {"s_out", Quantity::SpecificEntropy},
-                       {"h_s", Quantity::SpecificEnergy},
-                       {"work", Quantity::SpecificEnergy}},
-                      [](const double* a, double* o) {
-                          const eq::Pumping r = eq::pump_pT(a[0], a[1], a[2], a[3]);
-                          o[0] = r.h_out;
-                          o[1] = r.T_out;
-                          o[2] = r.s_out;
-                          o[3] = r.h_s;
-                          o[4] = r.work;
-                      }));
-    out.push_back(number("STEAM.PUMP.HOUT.PT", "pumpHoutPT", cat_equipment,
-                         "Pump outlet specific enthalpy from inlet pressure and temperature, outlet pressure and "
-                         "efficiency." + defn,
-                         args(), Quantity::SpecificEnergy,
-                         [](const double* a, double* o) { o[0] = eq::pump_pT(a[0], a[1], a[2], a[3]).h_out; }));
-    out.push_back(number("STEAM.PUMP.TOUT.PT", "pumpToutPT", cat_equipment,
-                         "Pump outlet temperature from inlet pressure and temperature, outlet pressure and "
-                         "efficiency." + defn,
-                         args(), Quantity::Temperature,
-                         [](const double* a, double* o) { o[0] = eq::pump_pT(a[0], a[1], a[2], a[3]).T_out; }));
-    out.push_back(number("STEAM.PUMP.WORK.PT", "pumpWorkPT", cat_equipment,
-                         "Pump specific work h_out - h_in from inlet pressure and temperature, outlet pressure and "
-                         "efficiency." + defn,
-                         args(), Quantity::SpecificEnergy,
-                         [](const double* a, double* o) { o[0] = eq::pump_pT(a[0], a[1], a[2], a[3]).work; }));
+    const P inlets[] = {
+        {"PT", Arg{"T_in", Quantity::Temperature, "Inlet temperature (subcooled water)"},
+         "inlet pressure and temperature", " the inlet must be subcooled water (for saturated water use the PH form).",
+         &eq::pump_pT},
+        {"PH", Arg{"h_in", Quantity::SpecificEnergy, "Inlet specific enthalpy (subcooled or saturated water)"},
+         "inlet pressure and enthalpy", " the inlet is subcooled or saturated water, e.g. h_in = STEAM.HF.P(p_in).",
+         &eq::pump_ph},
+    };
+    for (const P& in : inlets) {
+        const std::string code = in.code;
+        auto args = [&]() {
+            return std::vector<Arg>{
+                p_in(), in.second, p_out(),
+                Arg{"eta", Quantity::None,
+                    "Pump isentropic efficiency as a fraction, above 0 to 1 (0.80 for 80 %): (h_s - h_in)/(h_out - "
+                    "h_in)"}};
+        };
+        const std::string defn = std::string(" Work (h_s - h_in)/eta, h_s = h(p_out, s_in);") + in.inlet;
+        const std::string words = in.words;
+        auto fn = in.fn;
+        out.push_back(row(("STEAM.PUMP.OUTLET." + code).c_str(), ("pumpOutlet" + code).c_str(), cat_equipment,
+                          "Pump outlet state and specific work from " + words +
+                              ", outlet pressure and efficiency, as one row: h_out, T_out, s_out, h_s, work." + defn +
+                              " Enter as an array formula over 5 cells; with header = 1 the first row holds the "
+                              "names and units.",
+                          args(),
+                          {{"h_out", Quantity::SpecificEnergy},
+                           {"T_out", Quantity::Temperature},
+                           {"s_out", Quantity::SpecificEntropy},
+                           {"h_s", Quantity::SpecificEnergy},
+                           {"work", Quantity::SpecificEnergy}},
+                          [fn](const double* a, double* o) {
+                              const eq::Pumping r = fn(a[0], a[1], a[2], a[3]);
+                              o[0] = r.h_out;
+                              o[1] = r.T_out;
+                              o[2] = r.s_out;
+                              o[3] = r.h_s;
+                              o[4] = r.work;
+                          }));
+        out.push_back(number(("STEAM.PUMP.HOUT." + code).c_str(), ("pumpHout" + code).c_str(), cat_equipment,
+                             "Pump outlet specific enthalpy from " + words + ", outlet pressure and efficiency." +
+                                 defn,
+                             args(), Quantity::SpecificEnergy,
+                             [fn](const double* a, double* o) { o[0] = fn(a[0], a[1], a[2], a[3]).h_out; }));
+        out.push_back(number(("STEAM.PUMP.TOUT." + code).c_str(), ("pumpTout" + code).c_str(), cat_equipment,
+                             "Pump outlet temperature from " + words + ", outlet pressure and efficiency." + defn,
+                             args(), Quantity::Temperature,
+                             [fn](const double* a, double* o) { o[0] = fn(a[0], a[1], a[2], a[3]).T_out; }));
+        out.push_back(number(("STEAM.PUMP.WORK." + code).c_str(), ("pumpWork" + code).c_str(), cat_equipment,
+                             "Pump specific work h_out - h_in from " + words + ", outlet pressure and efficiency." +
+                                 defn,
+                             args(), Quantity::SpecificEnergy,
+                             [fn](const double* a, double* o) { o[0] = fn(a[0], a[1], a[2], a[3]).work; }));
+    }
 }
 
 void add_valve(std::vector<Function>& out) {
@@ -452,10 +471,10 @@ void add_mixing(std::vector<Function>& out) {
         {m_arg("m_steam", "Steam flow entering the desuperheater (before the spray)"),
          p_arg("p_steam", "Steam pressure (also the outlet pressure)"),
          T_arg("T_steam", "Steam temperature before the spray (superheated)"),
-         T_arg("T_out", "Target outlet temperature (above the saturation temperature at p_steam)"),
-         p_arg("p_water", "Spray-water pressure"), T_arg("T_water", "Spray-water temperature")},
+         p_arg("p_water", "Spray-water pressure"), T_arg("T_water", "Spray-water temperature"),
+         T_arg("T_out", "Target outlet temperature (above the saturation temperature at p_steam)")},
         Quantity::MassFlow,
-        [](const double* a, double* o) { o[0] = eq::desuperheater_spray(a[0], a[1], a[2], a[3], a[4], a[5]); }));
+        [](const double* a, double* o) { o[0] = eq::desuperheater_spray(a[0], a[1], a[2], a[5], a[3], a[4]); }));
 }
 
 // ---- Feedwater heater ---------------------------------------------------------------------------
@@ -485,47 +504,83 @@ void add_fwh(std::vector<Function>& out) {
                          [](const double* a, double* o) { o[0] = eq::fwh_rise(a[0], a[1]); }));
     out.push_back(number(
         "STEAM.FWH.EXTRACTION", "fwhExtraction", cat_equipment,
-        "Extraction steam flow to a closed feedwater heater from its energy balance (ASME PTC 12.1), with drains "
-        "cascading in from the heater above: m_ext = (m_fw (h_fw_out - h_fw_in) - m_casc (h_casc - h_drain)) / "
-        "(h_ext - h_drain). Enthalpies from e.g. STEAM.H.PT; m_casc = 0 without cascading drains.",
+        "Extraction steam flow to a closed feedwater heater from its energy balance (ASME PTC 12.1): m_ext = "
+        "(m_fw (h_fw_out - h_fw_in) - m_casc (h_casc - h_drain)) / (h_ext - h_drain). Enthalpies from e.g. "
+        "STEAM.H.PT; m_casc and h_casc only for drains cascading in from the heater above.",
         {m_arg("m_fw", "Feedwater flow through the heater"), h_arg("h_fw_in", "Feedwater inlet enthalpy"),
          h_arg("h_fw_out", "Feedwater outlet enthalpy"), h_arg("h_ext", "Extraction steam enthalpy at the heater inlet"),
-         h_arg("h_drain", "Drain outlet enthalpy"), m_arg("m_casc", "Cascading drain flow from the heater above (0 if none)"),
-         h_arg("h_casc", "Enthalpy of the cascading drain from the heater above")},
+         h_arg("h_drain", "Drain outlet enthalpy"),
+         Arg{"m_casc", Quantity::MassFlow, "Optional: cascading drain flow from the heater above; default 0 (none)",
+             true, false, 0.0},
+         Arg{"h_casc", Quantity::SpecificEnergy,
+             "Optional: enthalpy of the cascading drain; needed when m_casc is above 0", true}},
         Quantity::MassFlow, [](const double* a, double* o) {
-            o[0] = eq::fwh_extraction_flow(a[0], a[1], a[2], a[3], a[4], a[5], a[6]);
+            double h_casc = a[6];
+            if (a[5] == 0.0 && std::isnan(h_casc)) h_casc = a[4];  // no cascading drains: its enthalpy plays no part
+            if (std::isnan(h_casc))
+                throw Error(ErrorCode::InvalidArgument,
+                            "the argument h_casc is missing: with a cascading drain flow m_casc above 0, give the "
+                            "cascading drain's enthalpy h_casc too");
+            o[0] = eq::fwh_extraction_flow(a[0], a[1], a[2], a[3], a[4], a[5], h_casc);
         }));
 }
 
 // ---- Heat rate ------------------------------------------------------------------------------------
 
 void add_heat_rate(std::vector<Function>& out) {
-    auto cycle_args = []() {
-        return std::vector<Arg>{
-            m_arg("m_ms", "Main steam flow"),
-            h_arg("h_ms", "Main steam enthalpy"),
-            h_arg("h_fw", "Final feedwater enthalpy"),
-            m_arg("m_rh", "Reheat steam flow (0 for a unit without reheat)"),
-            h_arg("h_hrh", "Hot reheat enthalpy"),
-            h_arg("h_crh", "Cold reheat enthalpy"),
-            Arg{"P_gen", Quantity::Power, "Generator output (gross)"}};
+    // Main steam and feedwater (flow, then enthalpy in before out), the output
+    // (and for the net heat rate the auxiliary power and boiler efficiency),
+    // then the reheat stream as optional trailing arguments.
+    auto main_args = []() {
+        return std::vector<Arg>{m_arg("m_ms", "Main steam flow (leaving the boiler)"),
+                                h_arg("h_fw", "Final feedwater enthalpy (entering the boiler)"),
+                                h_arg("h_ms", "Main steam enthalpy"),
+                                Arg{"P_gen", Quantity::Power, "Generator output (gross)"}};
+    };
+    auto reheat = [](std::vector<Arg>& a) {
+        a.push_back(Arg{"m_rh", Quantity::MassFlow, "Optional: reheat steam flow; default 0 (no reheat)", true,
+                        false, 0.0});
+        a.push_back(Arg{"h_crh", Quantity::SpecificEnergy, "Optional: cold reheat enthalpy (reheater inlet)", true});
+        a.push_back(Arg{"h_hrh", Quantity::SpecificEnergy, "Optional: hot reheat enthalpy (reheater outlet)", true});
+    };
+    // a[k..k+2] = m_rh, h_crh, h_hrh; without reheat the enthalpies play no part.
+    struct Reheat {
+        double m, h_hrh, h_crh;
+    };
+    auto reheat_of = [](const double* a) {
+        Reheat r{a[0], a[2], a[1]};
+        if (r.m == 0.0) {
+            if (std::isnan(r.h_hrh)) r.h_hrh = 0.0;
+            if (std::isnan(r.h_crh)) r.h_crh = 0.0;
+        }
+        if (std::isnan(r.h_crh) || std::isnan(r.h_hrh))
+            throw Error(ErrorCode::InvalidArgument,
+                        std::string("the argument ") + (std::isnan(r.h_crh) ? "h_crh" : "h_hrh") +
+                            " is missing: with a reheat flow m_rh above 0, give the cold and hot reheat enthalpies "
+                            "h_crh and h_hrh too");
+        return r;
     };
     const std::string heat = "heat added to the cycle Q = m_ms (h_ms - h_fw) + m_rh (h_hrh - h_crh)";
+    std::vector<Arg> cyc = main_args();
+    reheat(cyc);
     out.push_back(number("STEAM.HEATRATE.CYCLE", "heatRateCycle", cat_performance,
                          "Turbine cycle heat rate Q / P_gen, with the " + heat +
                              ". Enthalpies from e.g. STEAM.H.PT. An error below 3600 kJ/kWh (3412.14 "
                              "Btu/kWh), which would mean more than 100 % efficiency.",
-                         cycle_args(), Quantity::HeatRate, [](const double* a, double* o) {
-                             o[0] = eq::cycle_heat_rate(a[0], a[1], a[2], a[3], a[4], a[5], a[6]);
+                         std::move(cyc), Quantity::HeatRate, [reheat_of](const double* a, double* o) {
+                             const Reheat r = reheat_of(a + 4);
+                             o[0] = eq::cycle_heat_rate(a[0], a[2], a[1], r.m, r.h_hrh, r.h_crh, a[3]);
                          }));
-    std::vector<Arg> net = cycle_args();
+    std::vector<Arg> net = main_args();
     net.push_back(Arg{"P_aux", Quantity::Power, "Auxiliary power (station service) taken from the generator output"});
     net.push_back(Arg{"eta_boiler", Quantity::None, "Boiler (steam generator) efficiency as a fraction (0.88 for 88 %)"});
+    reheat(net);
     out.push_back(number("STEAM.HEATRATE.NET", "heatRateNet", cat_performance,
                          "Net unit heat rate (Q / eta_boiler) / (P_gen - P_aux): fuel heat per unit of net "
                          "output, with the " + heat + ". Enthalpies from e.g. STEAM.H.PT.",
-                         std::move(net), Quantity::HeatRate, [](const double* a, double* o) {
-                             o[0] = eq::net_heat_rate(a[0], a[1], a[2], a[3], a[4], a[5], a[6], a[7], a[8]);
+                         std::move(net), Quantity::HeatRate, [reheat_of](const double* a, double* o) {
+                             const Reheat r = reheat_of(a + 6);
+                             o[0] = eq::net_heat_rate(a[0], a[2], a[1], r.m, r.h_hrh, r.h_crh, a[3], a[4], a[5]);
                          }));
 }
 

@@ -64,6 +64,11 @@ inline const std::map<std::string, std::map<std::string, double>>& overrides() {
         {"STEAM.PUMP.HOUT.PT", {{"p_in", 0.1}, {"T_in", 313.15}, {"p_out", 10.0}, {"eta", 0.8}}},
         {"STEAM.PUMP.TOUT.PT", {{"p_in", 0.1}, {"T_in", 313.15}, {"p_out", 10.0}, {"eta", 0.8}}},
         {"STEAM.PUMP.WORK.PT", {{"p_in", 0.1}, {"T_in", 313.15}, {"p_out", 10.0}, {"eta", 0.8}}},
+        // the same by (p,h): 167.6 kJ/kg is about h(0.1 MPa, 40 degC) (subcooled)
+        {"STEAM.PUMP.OUTLET.PH", {{"p_in", 0.1}, {"h_in", 167.6}, {"p_out", 10.0}, {"eta", 0.8}}},
+        {"STEAM.PUMP.HOUT.PH", {{"p_in", 0.1}, {"h_in", 167.6}, {"p_out", 10.0}, {"eta", 0.8}}},
+        {"STEAM.PUMP.TOUT.PH", {{"p_in", 0.1}, {"h_in", 167.6}, {"p_out", 10.0}, {"eta", 0.8}}},
+        {"STEAM.PUMP.WORK.PH", {{"p_in", 0.1}, {"h_in", 167.6}, {"p_out", 10.0}, {"eta", 0.8}}},
         // desuperheater: 5 MPa steam at 450 degC sprayed down to 350 degC (Tsat 264 degC)
         {"STEAM.DESUPERHEATER.SPRAY", {{"T_out", 623.15}}},
     };

@@ -307,10 +307,10 @@ TEST_F(PlantBook, DemoResultsMatchTheCoreInSiAndAfterSwitchingToUs) {
                 1e-9);
     EXPECT_NEAR(value("Heat rate", 'D', 31),
                 us_call("STEAM.HEATRATE.CYCLE",
-                        {Value::of(value("Heat rate", 'D', 9)), Value::of(value("Heat rate", 'D', 27)),
-                         Value::of(value("Heat rate", 'D', 28)), Value::of(value("Heat rate", 'D', 14)),
-                         Value::of(value("Heat rate", 'D', 30)), Value::of(value("Heat rate", 'D', 29)),
-                         Value::of(1000 * value("Heat rate", 'D', 19))}),
+                        {Value::of(value("Heat rate", 'D', 9)), Value::of(value("Heat rate", 'D', 28)),
+                         Value::of(value("Heat rate", 'D', 27)), Value::of(1000 * value("Heat rate", 'D', 19)),
+                         Value::of(value("Heat rate", 'D', 14)), Value::of(value("Heat rate", 'D', 29)),
+                         Value::of(value("Heat rate", 'D', 30))}),
                 1e-9 * value("Heat rate", 'D', 31));
 }
 

@@ -411,6 +411,56 @@ TEST(EquipmentPump, WorkedExample) {
     EXPECT_THROW(eq::pump_pT(0.01, 330.0, 1.0, 0.8), Error);
 }
 
+TEST(EquipmentPump, SaturatedInletByEnthalpy) {
+    // Condensate leaving the hotwell saturated at 8 kPa, pumped to 16.5 MPa with eta = 0.85,
+    // and deaerator water saturated at 0.5 MPa pumped to 20 MPa with eta = 0.80. Check values
+    // from python3-iapws 1.5.2 (Debian), generated once with /usr/bin/python3: IAPWS97(P, x=0)
+    // for h', s'; IAPWS97(P=p_out, s=s') for h_s; IAPWS97(P=p_out, h=h_out) for T_out, s_out.
+    struct Case {
+        double p_in, p_out, eta, h_f, s_f, h_s, h_out, T_out, s_out;
+    };
+    const Case cases[] = {
+        {0.008, 16.5, 0.85, 173.85176857278344, 0.5925315835141691, 190.4256679569857, 193.35047373066845,
+         315.8684922178203, 0.6018015197844675},
+        {0.5, 20.0, 0.80, 640.1853353633861, 1.8605992790566916, 661.386927387105, 666.6873253930346,
+         428.355870017712, 1.8729910943959467},
+    };
+    for (const Case& c : cases) {
+        const double hf = saturation_p(c.p_in).liq.h;
+        EXPECT_LT(rel(hf, c.h_f), 1e-8);
+        const eq::Pumping p = eq::pump_ph(c.p_in, hf, c.p_out, c.eta);
+        EXPECT_LT(rel(p.s_in, c.s_f), 1e-8);
+        EXPECT_LT(rel(p.h_s, c.h_s), 1e-8);
+        EXPECT_LT(rel(p.h_out, c.h_out), 1e-8);
+        EXPECT_NEAR(p.T_out, c.T_out, 1e-6);
+        EXPECT_LT(rel(p.s_out, c.s_out), 1e-7);
+        // Through the catalogue, h_in from STEAM.HF.P, also in US units (the round trip
+        // through Btu/lbm may put h a few ulps above h': still saturated water).
+        const double hf_cell = num(call_num("STEAM.HF.P", {c.p_in}));
+        EXPECT_NEAR(num(call_num("STEAM.PUMP.HOUT.PH", {c.p_in, hf_cell, c.p_out, c.eta})), p.h_out, 1e-9);
+        const double p_in_psia = units::convert(c.p_in, "MPa", "psia");
+        const double p_out_psia = units::convert(c.p_out, "MPa", "psia");
+        const double hf_us = num(call_num("STEAM.HF.P", {p_in_psia}, "US"));
+        EXPECT_NEAR(num(call_num("STEAM.PUMP.WORK.PH", {p_in_psia, hf_us, p_out_psia, c.eta}, "US")),
+                    units::convert(p.work, "kJ/kg", "Btu/lbm"), 1e-9);
+        // The (p,T) form agrees below saturation and its sentence points at the PH form on the line.
+        const Value v = call_num("STEAM.PUMP.HOUT.PT", {c.p_in, saturation_temperature(c.p_in) - 273.15, c.p_out, c.eta});
+        ASSERT_EQ(v.kind, Value::Kind::Error);
+        EXPECT_NE(v.text.find("STEAM.PUMP.HOUT.PH"), std::string::npos) << v.text;
+        EXPECT_NE(v.text.find("STEAM.HF.P"), std::string::npos) << v.text;
+    }
+    // Subcooled water by (p,h) equals the (p,T) form.
+    const State w = state_pT(0.1, 313.15);
+    EXPECT_NEAR(eq::pump_ph(0.1, w.h, 10.0, 0.8).h_out, eq::pump_pT(0.1, 313.15, 10.0, 0.8).h_out, 1e-9);
+    // Wet steam is not a pump inlet: the sentence names h_in and the saturated-liquid limit.
+    const double hf = saturation_p(0.008).liq.h;
+    const Value wet = call_num("STEAM.PUMP.HOUT.PH", {0.008, hf + 10.0, 16.5, 0.85});
+    ASSERT_EQ(wet.kind, Value::Kind::Error);
+    EXPECT_EQ(wet.error, ErrorCode::Impossible);
+    EXPECT_NE(wet.text.find("h_in"), std::string::npos) << wet.text;
+    EXPECT_NE(wet.text.find("saturated-liquid enthalpy"), std::string::npos) << wet.text;
+}
+
 TEST(EquipmentValve, WorkedExampleAndFlashing) {
     // 2 MPa, 300 degC (h = 3024.25 kJ/kg, python3-iapws 1.5.2 (Debian)) throttled to 0.1 MPa.
     // Hand check, interpolating the 0.1 MPa table (from memory): 250 degC h = 2974.5,
@@ -500,19 +550,19 @@ TEST(EquipmentHeatRate, WorkedExampleSIandUS) {
     EXPECT_NEAR(eq::cycle_heat_rate(150, 3400, 1100, 130, 3550, 3050, 180000), 8200.0, 1e-9);
     EXPECT_NEAR(eq::net_heat_rate(150, 3400, 1100, 130, 3550, 3050, 180000, 9000, 0.88), 1.476e9 / 150480.0,
                 1e-9);
-    EXPECT_NEAR(num(call_num("STEAM.HEATRATE.CYCLE", {150, 3400, 1100, 130, 3550, 3050, 180000})), 8200.0, 1e-9);
+    EXPECT_NEAR(num(call_num("STEAM.HEATRATE.CYCLE", {150, 1100, 3400, 180000, 130, 3050, 3550})), 8200.0, 1e-9);
     // US: lbm/h and Btu/lbm in, kW in, Btu/kWh out = kJ/kWh / 1.05505585262 (NIST SP 811).
     auto lbh = [](double kg_s) { return units::convert(kg_s, "kg/s", "lbm/h"); };
     auto btu = [](double kJkg) { return units::convert(kJkg, "kJ/kg", "Btu/lbm"); };
     EXPECT_NEAR(num(call_num("STEAM.HEATRATE.CYCLE",
-                             {lbh(150), btu(3400), btu(1100), lbh(130), btu(3550), btu(3050), 180000}, "US")),
+                             {lbh(150), btu(1100), btu(3400), 180000, lbh(130), btu(3050), btu(3550)}, "US")),
                 8200.0 / kJ_per_Btu, 1e-8);
     EXPECT_NEAR(num(call_num("STEAM.HEATRATE.NET",
-                             {lbh(150), btu(3400), btu(1100), lbh(130), btu(3550), btu(3050), 180000, 9000, 0.88},
+                             {lbh(150), btu(1100), btu(3400), 180000, 9000, 0.88, lbh(130), btu(3050), btu(3550)},
                              "US")),
                 1.476e9 / 150480.0 / kJ_per_Btu, 1e-8);
     // MW through an override.
-    EXPECT_NEAR(num(call_num("STEAM.HEATRATE.CYCLE", {150, 3400, 1100, 130, 3550, 3050, 180}, "SI P=MW")), 8200.0,
+    EXPECT_NEAR(num(call_num("STEAM.HEATRATE.CYCLE", {150, 1100, 3400, 180, 130, 3050, 3550}, "SI P=MW")), 8200.0,
                 1e-9);
     // Without reheat.
     EXPECT_NEAR(eq::cycle_heat_rate(100, 3400, 1000, 0, 0, 0, 80000), 3600.0 * 240000 / 80000, 1e-9);
@@ -641,7 +691,7 @@ TEST(EquipmentCall, RowFunctions) {
     EXPECT_NEAR(num(call_num("STEAM.MIX.T", {10, 3000, 30, 200, 0.1})), saturation_p(0.1).T - 273.15, 1e-9);
     EXPECT_NEAR(num(call_num("STEAM.VALVE.TOUT.PT", {2.0, 300.0, 0.1})), eq::valve_pT(2.0, 573.15, 0.1).T_out - 273.15,
                 1e-9);
-    EXPECT_NEAR(num(call_num("STEAM.DESUPERHEATER.SPRAY", {100.0, 10.0, 550.0, 500.0, 15.0, 180.0})),
+    EXPECT_NEAR(num(call_num("STEAM.DESUPERHEATER.SPRAY", {100.0, 10.0, 550.0, 15.0, 180.0, 500.0})),
                 eq::desuperheater_spray(100.0, 10.0, 823.15, 773.15, 15.0, 453.15), 1e-12);
     // Supercritical outlet: x is not defined (an error cell in the row, an error for XOUT).
     const Value x = call_num("STEAM.TURBINE.XOUT.PT", {30.0, 600.0, 23.0, 0.9});
@@ -677,7 +727,7 @@ TEST(EquipmentCatalogue, NamesMethodsAndArguments) {
     }
     EXPECT_EQ(names.size(), catalogue::functions().size());
     EXPECT_EQ(methods.size(), catalogue::functions().size());
-    EXPECT_EQ(count, 37);
+    EXPECT_EQ(count, 41);  // 37 + the four pump functions by (p,h)
 }
 
 // Row functions take their units argument before the optional header. Disabled
@@ -740,16 +790,40 @@ TEST(EquipmentImpossible, HeatersSprayAndHeatRate) {
     EXPECT_EQ(code_of_call("STEAM.FWH.EXTRACTION", {100, 600, 400, 3000, 450, 0, 0}), ErrorCode::Impossible);
     EXPECT_NEAR(num(call_num("STEAM.FWH.DCA", {110, 110})), 0.0, 0.0);  // zero approach is allowed
     // Spray water below the steam pressure cannot enter it.
-    EXPECT_TRUE(says("STEAM.DESUPERHEATER.SPRAY", {100, 10, 500, 400, 8, 150}, "above the steam pressure"));
-    EXPECT_EQ(call_num("STEAM.DESUPERHEATER.SPRAY", {100, 10, 500, 400, 12, 150}).kind, Value::Kind::Number);
+    EXPECT_TRUE(says("STEAM.DESUPERHEATER.SPRAY", {100, 10, 500, 8, 150, 400}, "above the steam pressure"));
+    EXPECT_EQ(call_num("STEAM.DESUPERHEATER.SPRAY", {100, 10, 500, 12, 150, 400}).kind, Value::Kind::Number);
     // Heat rate below 3600 kJ/kWh = more than 100 % efficiency (first law; 3600 kJ = 1 kWh exactly).
-    EXPECT_TRUE(says("STEAM.HEATRATE.CYCLE", {300, 3400, 1200, 250, 3600, 3050, 3000000}, "100 % efficiency"));
-    EXPECT_TRUE(says("STEAM.HEATRATE.NET", {300, 3400, 1200, 250, 3600, 3050, 3000000, 1000, 0.9}, "100 %"));
+    EXPECT_TRUE(says("STEAM.HEATRATE.CYCLE", {300, 1200, 3400, 3000000, 250, 3050, 3600}, "100 % efficiency"));
+    EXPECT_TRUE(says("STEAM.HEATRATE.NET", {300, 1200, 3400, 3000000, 1000, 0.9, 250, 3050, 3600}, "100 %"));
     // A reheater that removes heat.
-    EXPECT_TRUE(says("STEAM.HEATRATE.CYCLE", {300, 3400, 1200, 250, 3050, 3600, 300000}, "a reheater adds heat"));
+    EXPECT_TRUE(says("STEAM.HEATRATE.CYCLE", {300, 1200, 3400, 300000, 250, 3600, 3050}, "a reheater adds heat"));
     // Without reheat the reheat enthalpies do not matter.
-    EXPECT_EQ(call_num("STEAM.HEATRATE.CYCLE", {300, 3400, 1200, 0, 3050, 3600, 300000}).kind,
+    EXPECT_EQ(call_num("STEAM.HEATRATE.CYCLE", {300, 1200, 3400, 300000, 0, 3600, 3050}).kind,
               Value::Kind::Number);
+}
+
+TEST(EquipmentArguments, OptionalCascadeAndReheat) {
+    // FWH.EXTRACTION without cascading drains: the last two arguments may be left out.
+    // Hand check: 200 (850 - 700)/(2900 - 720) = 30000/2180 kg/s (definition).
+    EXPECT_NEAR(num(call_num("STEAM.FWH.EXTRACTION", {200, 700, 850, 2900, 720})), 30000.0 / 2180.0, 1e-12);
+    // Hand check: (30000 - 10 (900 - 720))/2180 (definition).
+    EXPECT_NEAR(num(call_num("STEAM.FWH.EXTRACTION", {200, 700, 850, 2900, 720, 10, 900})), 28200.0 / 2180.0, 1e-12);
+    // A cascading flow without its enthalpy is an error that names h_casc.
+    const Value v = call_num("STEAM.FWH.EXTRACTION", {200, 700, 850, 2900, 720, 10});
+    ASSERT_EQ(v.kind, Value::Kind::Error);
+    EXPECT_NE(v.text.find("h_casc is missing"), std::string::npos) << v.text;
+    // Left out between arguments (";;" in a cell: an empty value) with the units after them.
+    const Value skip = call_scalar(fn("STEAM.FWH.EXTRACTION"),
+                                   {Value::of(200), Value::of(700), Value::of(850), Value::of(2900), Value::of(720),
+                                    Value{}, Value{}, Value::of_text("SI")});
+    EXPECT_NEAR(num(skip), 30000.0 / 2180.0, 1e-12);
+    // HEATRATE.CYCLE without reheat: Q = 100 (3400 - 1000) kW, 3600 Q / 80000 (definition).
+    EXPECT_NEAR(num(call_num("STEAM.HEATRATE.CYCLE", {100, 1000, 3400, 80000})), 3600.0 * 240000 / 80000, 1e-9);
+    const Value rh = call_num("STEAM.HEATRATE.CYCLE", {100, 1000, 3400, 80000, 90, 3000});
+    ASSERT_EQ(rh.kind, Value::Kind::Error);
+    EXPECT_NE(rh.text.find("h_hrh is missing"), std::string::npos) << rh.text;
+    EXPECT_NEAR(num(call_num("STEAM.HEATRATE.NET", {100, 1000, 3400, 80000, 4000, 0.9})),
+                3600.0 * 240000 / 0.9 / 76000, 1e-9);  // definition
 }
 
 TEST(EquipmentUncertainty, GaugeReadingsTakeTheirFractionOfTheGaugeValue) {

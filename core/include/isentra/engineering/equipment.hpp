@@ -99,7 +99,12 @@ struct Pumping {
     double work = 0;  // h_out - h_in = (h_s - h_in)/eta, kJ/kg (positive)
 };
 // Inlet (p,T) must be liquid (below Tsat(p_in)); p_out >= p_in; 0 < eta <= 1.
+// Exactly at Tsat(p_in) the error points at pump_ph with h' (saturated water).
 Pumping pump_pT(double p_in, double T_in, double p_out, double eta);
+// Inlet (p,h): subcooled or saturated water (h_in <= h'(p_in), within 1e-9
+// relative, so h' that went through a unit conversion counts as saturated),
+// e.g. condensate leaving a hotwell or water leaving a deaerator.
+Pumping pump_ph(double p_in, double h_in, double p_out, double eta);
 
 // ---- Throttling valve (isenthalpic) -------------------------------------------
 

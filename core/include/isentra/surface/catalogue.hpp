@@ -29,8 +29,9 @@ struct Arg {
     std::string description;  // e.g. "Pressure"; units are appended by describe_arg()
     bool optional = false;    // only trailing arguments may be optional
     bool varargs = false;     // the last argument takes all remaining values (UNO sequence<any>)
-    // Value of an omitted optional numeric argument, in core units (NaN: none,
-    // the argument must be given).
+    // Value of an omitted optional numeric argument, in core units. NaN for an
+    // optional argument: the function receives NaN and decides (e.g. h_casc
+    // is needed only when m_casc is above 0).
     double default_value = std::numeric_limits<double>::quiet_NaN();
 };
 
