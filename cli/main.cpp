@@ -4,6 +4,8 @@
 //
 //   isentra 'STEAM.H.PT(10; 500)'     evaluates the calls given as arguments
 //   isentra < calls.txt              reads one call per line from standard input
+//   isentra csv [OPTION]... [FILE] NAME=CALL...   new columns for a CSV file (csv.cpp)
+//   isentra table pT|sat-T|sat-p [OPTION]...      property tables (table.cpp)
 //   isentra --list | --help | --version
 //
 // Every call prints exactly one line (see formula.hpp for the syntax and
@@ -12,20 +14,21 @@
 // the command line itself is wrong (2).
 #include <cstdio>
 #include <cstring>
-#include <iostream>
+#include <string_view>
 #include <map>
 #include <string>
 #include <vector>
 
+#include "io.hpp"
 #include "isentra/surface/catalogue.hpp"
 #include "isentra/surface/formula.hpp"
 #include "isentra/units/units.hpp"
+#include "modes.hpp"
 
 namespace {
 
 namespace cat = isentra::catalogue;
-
-constexpr int exit_usage = 2;
+using isentra::cli::exit_usage;
 
 // "STEAM.H.PT(p; T; [units])"
 std::string signature(const cat::Function& f) {
@@ -62,11 +65,15 @@ void print_help(std::FILE* out) {
     const auto& fs = cat::functions();
     std::string h;
     h += "Usage: isentra [OPTION]... [CALL]...\n"
+         "       isentra csv [OPTION]... [FILE] NAME=CALL...    (isentra csv --help)\n"
+         "       isentra table pT|sat-T|sat-p [OPTION]...       (isentra table --help)\n"
          "Water and steam properties (IAPWS-IF97 and related IAPWS releases) and steam plant\n"
          "calculations: the functions of the Isentra add-in for LibreOffice Calc, from the command line.\n"
          "\n"
          "  isentra 'STEAM.H.PT(10; 500)'    evaluate the calls given as arguments, one output line each\n"
          "  isentra < calls.txt              with no call, read calls from standard input, one per line\n"
+         "  isentra csv log.csv 'h=H.PT(p; T)'  add computed columns to a CSV file of readings\n"
+         "  isentra table pT --p 1:10:1 --T 200:600:50   a property table\n"
          "\n"
          "Options:\n"
          "  --list       every function with its arguments and one-line description\n"
@@ -87,7 +94,7 @@ void print_help(std::FILE* out) {
          "  - whitespace is allowed between any two parts\n"
          "\n"
          "Output: exactly one line per call (a blank input line gives a blank output line):\n"
-         "  - a number: printf \"%.17g\" (17 significant digits, trailing zeros dropped)\n"
+         "  - a number: 17 significant digits, trailing zeros dropped (as printf \"%.17g\" in the C locale)\n"
          "  - a text result (e.g. STEAM.VERSION): the text\n"
          "  - an invalid call or input: \"error: \" and the explanation, in your units\n"
          "  - a row result or a range: the elements in row-major order, separated by tabs;\n"
@@ -145,18 +152,67 @@ void print_help(std::FILE* out) {
 
 void print_version(std::FILE* out) { std::fprintf(out, "isentra %s\n", cat::version()); }
 
-void evaluate_line(std::string line) {
-    if (!line.empty() && line.back() == '\r') line.pop_back();
-    bool blank = true;
+// One call text -> one output line (without the newline).
+std::string answer(std::string_view line) {
+    if (!line.empty() && line.back() == '\r') line.remove_suffix(1);
     for (char c : line)
-        if (!(c == ' ' || c == '\t' || c == '\f' || c == '\v')) {
-            blank = false;
+        if (!(c == ' ' || c == '\t' || c == '\f' || c == '\v'))
+            return isentra::formula::format_line(isentra::formula::evaluate(line));
+    return {};
+}
+
+void flush_writer(void* w) { static_cast<isentra::cli::Writer*>(w)->flush(); }
+
+// Calls on standard input, one per line. Answers are written in blocks, but
+// everything answered is flushed before the next read that may wait, so the
+// tool still works as a co-process (one answer per line sent).
+int evaluate_stdin() {
+    isentra::cli::Reader in(0);
+    isentra::cli::Writer out(1);
+    in.before_wait = flush_writer;
+    in.before_wait_arg = &out;
+    bool first = true;
+    for (;;) {
+        const char* p = in.begin();
+        const char* end = in.end();
+        for (;;) {
+            const char* nl = static_cast<const char*>(std::memchr(p, '\n', static_cast<std::size_t>(end - p)));
+            if (!nl) break;
+            std::string_view line(p, static_cast<std::size_t>(nl - p));
+            if (first && line.substr(0, 3) == "\xEF\xBB\xBF") line.remove_prefix(3);  // UTF-8 byte-order mark
+            first = false;
+            out.put(answer(line));
+            out.put('\n');
+            p = nl + 1;
+        }
+        in.consume_to(p);
+        if (in.eof()) {
+            if (p < end) {  // a last line without a newline
+                std::string_view line(p, static_cast<std::size_t>(end - p));
+                if (first && line.substr(0, 3) == "\xEF\xBB\xBF") line.remove_prefix(3);
+                out.put(answer(line));
+                out.put('\n');
+            }
             break;
         }
-    const std::string out = blank ? std::string() : isentra::formula::format_line(isentra::formula::evaluate(line));
+        in.fill();
+    }
+    out.flush();
+    if (in.error()) {
+        std::fprintf(stderr, "isentra: reading standard input failed: %s\n", std::strerror(in.error()));
+        return isentra::cli::exit_failure;
+    }
+    if (out.error()) {
+        std::fprintf(stderr, "isentra: writing standard output failed: %s\n", std::strerror(out.error()));
+        return isentra::cli::exit_failure;
+    }
+    return 0;
+}
+
+void evaluate_line(const std::string& line) {
+    const std::string out = answer(line);
     std::fputs(out.c_str(), stdout);
     std::fputc('\n', stdout);
-    std::fflush(stdout);  // one answer per line as it comes (usable as a co-process)
 }
 
 // One line per unit: quantity, symbol (as CONVERT and overrides take it), meaning.
@@ -173,7 +229,18 @@ int usage_error(const std::string& message) {
 
 }  // namespace
 
+namespace isentra::cli {
+int usage(const std::string& mode, const std::string& message) {
+    std::fprintf(stderr, "isentra %s: %s\nTry 'isentra %s --help'.\n", mode.c_str(), message.c_str(), mode.c_str());
+    return exit_usage;
+}
+}  // namespace isentra::cli
+
 int main(int argc, char** argv) {
+    if (argc >= 2 && (std::strcmp(argv[1], "csv") == 0 || std::strcmp(argv[1], "table") == 0)) {
+        const std::vector<std::string> rest(argv + 2, argv + argc);
+        return std::strcmp(argv[1], "csv") == 0 ? isentra::cli::run_csv(rest) : isentra::cli::run_table(rest);
+    }
     bool options_done = false;
     enum class Action { Help, List, Units, Version, Call };
     std::vector<std::pair<Action, std::string>> actions;
@@ -201,13 +268,8 @@ int main(int argc, char** argv) {
         }
     }
     if (actions.empty()) {
-        std::string line;
-        bool first = true;
-        while (std::getline(std::cin, line)) {
-            if (first && line.compare(0, 3, "\xEF\xBB\xBF") == 0) line.erase(0, 3);  // UTF-8 byte-order mark
-            first = false;
-            evaluate_line(line);
-        }
+        std::fflush(stdout);
+        return evaluate_stdin();
     }
     std::fflush(stdout);
     return 0;

@@ -3,6 +3,7 @@
 // over ranges, and error sentences in the user's own units.
 #include "isentra/surface/call.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <cstdio>
 #include <exception>
@@ -124,6 +125,97 @@ Table call_explain(const std::vector<Table>& args) {
     return r;
 }
 
+// One numeric argument of one state (shared by call() and PreparedCall, so
+// that both convert and explain in exactly the same way).
+enum class ArgStatus { Ok, Skip, Failed };
+// v: the argument's value for this state; scalar_arg: the argument is a
+// single value (not a range); ranged: the call is broadcast over ranges.
+ArgStatus state_arg(const catalogue::Arg& arg, const Value& v, bool scalar_arg, bool ranged,
+                    const units::UnitSpec& spec, double& out, Value& err) {
+    if (v.kind == Value::Kind::Number) {
+        if (!std::isfinite(v.number)) {
+            err = Value::of_error(ErrorCode::InvalidArgument, arg.name + " is not a finite number");
+            return ArgStatus::Failed;
+        }
+        out = spec.to_core(arg.quantity, v.number);
+        return ArgStatus::Ok;
+    }
+    if (v.kind == Value::Kind::Empty) {
+        if (scalar_arg && (arg.optional || !std::isnan(arg.default_value))) {
+            // left out between other arguments (";;"): its default (NaN: the function decides)
+            out = arg.default_value;
+            return ArgStatus::Ok;
+        }
+        if (ranged && !scalar_arg) return ArgStatus::Skip;  // an empty cell in a range: an empty result
+        err = Value::of_error(ErrorCode::InvalidArgument, "the argument " + arg.name + " is empty");
+        return ArgStatus::Failed;
+    }
+    if (v.kind == Value::Kind::Error) {
+        err = v;
+        return ArgStatus::Failed;
+    }
+    err = Value::of_error(ErrorCode::InvalidArgument,
+                          "the argument " + arg.name + " is the text \"" + v.text + "\" where a number is expected");
+    return ArgStatus::Failed;
+}
+
+std::size_t result_width(const Function& f) { return f.kind == ResultKind::Row ? f.row_names.size() : 1; }
+
+Quantity result_quantity_of(const Function& f, std::size_t c) {
+    return f.kind == ResultKind::Row ? f.row_quantities[c] : f.result;
+}
+
+// Evaluates f on one state (a: numeric arguments in core units) and gives
+// each result element to put(c, Value). Shared by call() and PreparedCall.
+template <class Put>
+void evaluate_state(const Function& f, const units::UnitSpec& spec, const double* a, Put&& put) {
+    double res[32];
+    const std::size_t width = result_width(f);
+    try {
+        if (f.eval_units) f.eval_units(a, res, spec);
+        else f.eval(a, res);
+        for (std::size_t c = 0; c < width; ++c) {
+            const double v = res[c];
+            if (!std::isfinite(v))
+                put(c, Value::of_error(ErrorCode::NotDefined, (f.kind == ResultKind::Row ? f.row_names[c] : f.name) +
+                                                                  " is not defined for this state"));
+            else
+                put(c, Value::of(spec.from_core(result_quantity_of(f, c), v)));
+        }
+    } catch (const Error& e) {
+        const Value ev = error_value(e, spec);
+        for (std::size_t c = 0; c < width; ++c) put(c, ev);
+    }
+}
+
+// The checks of call() on the call as a whole: argument count and units.
+// Returns false with err set when the call cannot be evaluated.
+bool check_count(const Function& f, std::size_t given, Value& err) {
+    std::size_t required = 0;
+    for (const auto& a : f.args)
+        if (!a.optional) ++required;
+    if (given >= required && given <= f.args.size()) return true;
+    err = Value::of_error(ErrorCode::InvalidArgument,
+                          f.name + " takes " + std::to_string(required) +
+                              (required == f.args.size() ? "" : " to " + std::to_string(f.args.size())) +
+                              " arguments, not " + std::to_string(given));
+    return false;
+}
+
+bool units_of_call(const Function& f, const std::vector<Table>& args, units::UnitSpec& spec, Value& err) {
+    const std::size_t units_index = f.units_index();
+    if (units_index >= args.size()) return true;
+    std::string text;
+    if (!text_arg(args[units_index], "units", text, err)) return false;
+    try {
+        spec = units::UnitSpec::parse(text);
+    } catch (const Error& e) {
+        err = Value::of_error(e.code(), e.what());
+        return false;
+    }
+    return true;
+}
+
 }  // namespace
 
 Table call(const Function& f, const std::vector<Table>& args) {
@@ -131,30 +223,13 @@ Table call(const Function& f, const std::vector<Table>& args) {
         if (f.name == "STEAM.EXPLAIN") return call_explain(args);
         if (f.name == "STEAM.VERSION") return Table::scalar(Value::of_text(std::string("Isentra ") + catalogue::version()));
 
-        std::size_t required = 0;
-        for (const auto& a : f.args)
-            if (!a.optional) ++required;
-        if (args.size() < required || args.size() > f.args.size())
-            return error_table(Value::of_error(
-                ErrorCode::InvalidArgument,
-                f.name + " takes " + std::to_string(required) +
-                    (required == f.args.size() ? "" : " to " + std::to_string(f.args.size())) + " arguments, not " +
-                    std::to_string(args.size())));
+        Value err;
+        if (!check_count(f, args.size(), err)) return error_table(err);
         if (f.name == "STEAM.CONVERT") return call_convert(f, args);
 
         // Units.
         units::UnitSpec spec;
-        const std::size_t units_index = f.units_index();
-        if (units_index < args.size()) {
-            std::string text;
-            Value err;
-            if (!text_arg(args[units_index], "units", text, err)) return error_table(err);
-            try {
-                spec = units::UnitSpec::parse(text);
-            } catch (const Error& e) {
-                return error_table(Value::of_error(e.code(), e.what()));
-            }
-        }
+        if (!units_of_call(f, args, spec, err)) return error_table(err);
 
         // Header option of Row functions.
         bool header = false;
@@ -194,7 +269,7 @@ Table call(const Function& f, const std::vector<Table>& args) {
         }
         const bool ranged = !(rows == 1 && cols == 1);
         const std::size_t n = rows * cols;
-        const std::size_t width = f.kind == ResultKind::Row ? f.row_names.size() : 1;
+        const std::size_t width = result_width(f);
 
         Table out;
         if (f.kind == ResultKind::Row) {
@@ -215,7 +290,6 @@ Table call(const Function& f, const std::vector<Table>& args) {
         }
 
         double a[16];
-        double res[32];
         for (std::size_t k = 0; k < n; ++k) {
             Value result;
             bool empty = false;
@@ -229,37 +303,10 @@ Table call(const Function& f, const std::vector<Table>& args) {
                 }
                 const Table& t = args[i];
                 const Value& v = is_scalar(t) ? t.cells[0] : t.cells[k];
-                if (v.kind == Value::Kind::Number) {
-                    if (!std::isfinite(v.number)) {
-                        result = Value::of_error(ErrorCode::InvalidArgument, spec_arg.name + " is not a finite number");
-                        failed = true;
-                        break;
-                    }
-                    a[j] = spec.to_core(spec_arg.quantity, v.number);
-                } else if (v.kind == Value::Kind::Empty) {
-                    if (is_scalar(t) && (spec_arg.optional || !std::isnan(spec_arg.default_value))) {
-                        // left out between other arguments (";;"): its default
-                        a[j] = spec_arg.default_value;
-                        continue;
-                    }
-                    if (ranged && !is_scalar(t)) {
-                        empty = true;
-                        break;
-                    }
-                    result = Value::of_error(ErrorCode::InvalidArgument, "the argument " + spec_arg.name + " is empty");
-                    failed = true;
-                    break;
-                } else if (v.kind == Value::Kind::Error) {
-                    result = v;
-                    failed = true;
-                    break;
-                } else {
-                    result = Value::of_error(ErrorCode::InvalidArgument,
-                                             "the argument " + spec_arg.name + " is the text \"" + v.text +
-                                                 "\" where a number is expected");
-                    failed = true;
-                    break;
-                }
+                const ArgStatus st = state_arg(spec_arg, v, is_scalar(t), ranged, spec, a[j], result);
+                if (st == ArgStatus::Skip) empty = true;
+                if (st == ArgStatus::Failed) failed = true;
+                if (st != ArgStatus::Ok) break;
             }
             auto put = [&](std::size_t c, Value v) {
                 if (f.kind == ResultKind::Row) out.cells[(row0 + k) * width + c] = std::move(v);
@@ -270,23 +317,7 @@ Table call(const Function& f, const std::vector<Table>& args) {
                 for (std::size_t c = 0; c < width; ++c) put(c, result);
                 continue;
             }
-            try {
-                if (f.eval_units) f.eval_units(a, res, spec);
-                else f.eval(a, res);
-                for (std::size_t c = 0; c < width; ++c) {
-                    const Quantity q = f.kind == ResultKind::Row ? f.row_quantities[c] : f.result;
-                    const double v = res[c];
-                    if (!std::isfinite(v))
-                        put(c, Value::of_error(ErrorCode::NotDefined,
-                                               (f.kind == ResultKind::Row ? f.row_names[c] : f.name) +
-                                                   " is not defined for this state"));
-                    else
-                        put(c, Value::of(spec.from_core(q, v)));
-                }
-            } catch (const Error& e) {
-                const Value ev = error_value(e, spec);
-                for (std::size_t c = 0; c < width; ++c) put(c, ev);
-            }
+            evaluate_state(f, spec, a, put);
         }
         return out;
     } catch (const Error& e) {
@@ -302,6 +333,105 @@ Value call_scalar(const catalogue::Function& f, const std::vector<Value>& args) 
     for (const Value& v : args) t.push_back(Table::scalar(v));
     Table r = call(f, t);
     return r.cells.empty() ? Value{} : r.cells[0];
+}
+
+// ---- PreparedCall ----
+
+bool PreparedCall::supported(const Function& f) {
+    return f.kind != ResultKind::Text && f.name != "STEAM.EXPLAIN" && f.name != "STEAM.VERSION" &&
+           f.name != "STEAM.CONVERT";
+}
+
+PreparedCall::PreparedCall(const Function& f, const std::vector<Table>& args, const std::vector<std::size_t>& slots)
+    : f_(&f), width_(result_width(f)) {
+    const auto fail = [](const Value& v) { throw Error(v.error, v.text); };
+    const auto fail_text = [](const std::string& text) { throw Error(ErrorCode::InvalidArgument, text); };
+    if (!supported(f)) fail_text(f.name + " gives a text, not numbers; it cannot be evaluated state by state");
+    Value err;
+    if (!check_count(f, args.size(), err)) fail(err);
+    for (std::size_t i : slots) {
+        if (i >= args.size()) fail_text("internal error: a per-state argument has no place in the call");
+        const catalogue::Arg& a = f.args[i];
+        if (a.quantity == Quantity::Text || a.name == "header")
+            fail_text("the argument " + a.name + " of " + f.name + " must be written in the call, not read per state");
+    }
+    if (!units_of_call(f, args, spec_, err)) fail(err);
+    slots_.resize(slots.size());
+    for (std::size_t i = 0; i < f.args.size(); ++i) {
+        const catalogue::Arg& arg = f.args[i];
+        if (arg.quantity == Quantity::Text) continue;
+        if (arg.name == "header") {
+            if (i >= args.size()) continue;
+            if (!is_scalar(args[i])) fail_text("header must be a single value");
+            const Value& v = args[i].cells[0];
+            if (v.kind == Value::Kind::Number && v.number != 0.0)
+                fail_text("the header option of " + f.name + " is not available here: give it as FALSE or leave it out");
+            continue;
+        }
+        const std::size_t pos = a_.size();
+        a_.push_back(arg.default_value);
+        if (i >= args.size()) continue;  // omitted optional argument: its default (NaN: the function decides)
+        bool per_state = false;
+        for (std::size_t k = 0; k < slots.size(); ++k)
+            if (slots[k] == i) {
+                slots_[k].pos = pos;
+                slots_[k].arg = &arg;
+                order_.push_back(k);
+                per_state = true;
+            }
+        if (per_state) continue;
+        if (!is_scalar(args[i])) fail_text("the argument " + arg.name + " must be a single value here, not a range");
+        if (state_arg(arg, args[i].cells[0], true, false, spec_, a_[pos], err) != ArgStatus::Ok) fail(err);
+    }
+    if (a_.size() > 16 || width_ > 32) fail_text("internal error: " + f.name + " has too many arguments or results");
+}
+
+void PreparedCall::set_slot_units(std::size_t k, const units::UnitSpec& spec) {
+    slots_.at(k).own_units = true;
+    slots_[k].spec = spec;
+}
+
+Quantity PreparedCall::result_quantity(std::size_t c) const { return result_quantity_of(*f_, c); }
+
+bool PreparedCall::eval(const double* in, double* out) const noexcept {
+    try {
+        double a[16];
+        double res[32];
+        std::copy(a_.begin(), a_.end(), a);
+        for (std::size_t k = 0; k < slots_.size(); ++k) {
+            if (!std::isfinite(in[k])) return false;
+            const Slot& s = slots_[k];
+            a[s.pos] = (s.own_units ? s.spec : spec_).to_core(s.arg->quantity, in[k]);
+        }
+        if (f_->eval_units) f_->eval_units(a, res, spec_);
+        else f_->eval(a, res);
+        for (std::size_t c = 0; c < width_; ++c) {
+            if (!std::isfinite(res[c])) return false;
+            out[c] = spec_.from_core(result_quantity_of(*f_, c), res[c]);
+        }
+        return true;
+    } catch (...) {
+        return false;
+    }
+}
+
+void PreparedCall::eval(const Value* in, Value* out) const {
+    double a[16];
+    std::copy(a_.begin(), a_.end(), a);
+    Value err;
+    for (std::size_t k : order_) {
+        const Slot& s = slots_[k];
+        if (state_arg(*s.arg, in[k], true, false, s.own_units ? s.spec : spec_, a[s.pos], err) != ArgStatus::Ok) {
+            for (std::size_t c = 0; c < width_; ++c) out[c] = err;
+            return;
+        }
+    }
+    try {
+        evaluate_state(*f_, spec_, a, [&](std::size_t c, Value v) { out[c] = std::move(v); });
+    } catch (const std::exception& e) {
+        for (std::size_t c = 0; c < width_; ++c)
+            out[c] = Value::of_error(ErrorCode::InvalidArgument, std::string("internal error: ") + e.what());
+    }
 }
 
 }  // namespace isentra

@@ -413,14 +413,28 @@ const std::vector<Function>& functions() {
     return all;
 }
 
+namespace {
+char ascii_lower(char c) { return c >= 'A' && c <= 'Z' ? static_cast<char>(c - 'A' + 'a') : c; }
+bool same_ignoring_case(std::string_view a, std::string_view b) {
+    if (a.size() != b.size()) return false;
+    for (std::size_t k = 0; k < a.size(); ++k)
+        if (ascii_lower(a[k]) != ascii_lower(b[k])) return false;
+    return true;
+}
+}  // namespace
+
+// No allocation: the command line looks a name up for every call it reads.
 const Function* find(std::string_view name) {
-    std::string n = lower(std::string(name));
-    if (n.rfind("steam.", 0) != 0) n = "steam." + n;
+    const bool prefixed = name.size() >= 6 && same_ignoring_case(name.substr(0, 6), "steam.");
+    for (const Function& f : functions()) {
+        const std::string_view n = f.name;
+        if (prefixed ? same_ignoring_case(n, name)
+                     : (n.size() == name.size() + 6 && same_ignoring_case(n.substr(0, 6), "steam.") &&
+                        same_ignoring_case(n.substr(6), name)))
+            return &f;
+    }
     for (const Function& f : functions())
-        if (lower(f.name) == n) return &f;
-    std::string m = lower(std::string(name));
-    for (const Function& f : functions())
-        if (lower(f.method) == m) return &f;
+        if (same_ignoring_case(f.method, name)) return &f;
     return nullptr;
 }
 

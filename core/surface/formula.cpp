@@ -37,7 +37,7 @@ const char* const what_element = "a number, a \"text\", TRUE or FALSE";
 
 class Parser {
 public:
-    explicit Parser(std::string_view s) : s_(s) {}
+    Parser(std::string_view s, bool allow_names) : s_(s), allow_names_(allow_names) {}
 
     ParsedCall call() {
         ParsedCall out;
@@ -75,9 +75,14 @@ public:
                 } else {
                     Value v;
                     const std::size_t pos = i_;
+                    name_.clear();
                     if (element(v, true)) {
                         out.args.push_back(Table::scalar(std::move(v)));
                         empty.push_back(false);
+                        if (allow_names_) {
+                            out.names.resize(out.args.size());
+                            out.names.back() = name_;
+                        }
                     } else if (at_end() || peek() == ';' || peek() == ',' || peek() == ')') {
                         out.args.push_back(Table::scalar(Value{}));
                         empty.push_back(true);
@@ -113,12 +118,15 @@ public:
             out.args.pop_back();
             empty.pop_back();
         }
+        if (allow_names_) out.names.resize(out.args.size());
         return out;
     }
 
 private:
     std::string_view s_;
+    bool allow_names_;
     std::size_t i_ = 0;
+    std::string name_;  // the name element() found (allow_names_), else ""
 
     bool at_end() const { return i_ >= s_.size(); }
     char peek() const { return at_end() ? '\0' : s_[i_]; }
@@ -178,6 +186,11 @@ private:
             out = Value::of_text(text());
             return true;
         }
+        if (c == '[' && allow_names_ && in_argument) {
+            name_ = bracket_name();
+            out = Value{};
+            return true;
+        }
         if (is_digit(c) || c == '.' || c == '+' || c == '-') {
             out = Value::of(number());
             return true;
@@ -192,6 +205,11 @@ private:
             }
             if (equals_ignore_case(w, "FALSE")) {
                 out = Value::of(0.0);
+                return true;
+            }
+            if (allow_names_ && in_argument) {
+                name_ = std::string(w);
+                out = Value{};
                 return true;
             }
             fail(pos, "expected " + std::string(in_argument ? what_arg : what_element) + ", found the word \"" +
@@ -215,6 +233,27 @@ private:
                     ++i_;
                     continue;
                 }
+                return t;
+            }
+            t += c;
+        }
+    }
+
+    // [any name], "]]" for a ']' inside.
+    std::string bracket_name() {
+        const std::size_t open = i_;
+        ++i_;
+        std::string t;
+        for (;;) {
+            if (at_end()) fail(open, "the name has no closing ']'");
+            const char c = s_[i_++];
+            if (c == ']') {
+                if (peek() == ']') {
+                    t += ']';
+                    ++i_;
+                    continue;
+                }
+                if (t.empty()) fail(open, "the name in [] is empty");
                 return t;
             }
             t += c;
@@ -248,15 +287,20 @@ private:
                 fail(e, "expected digits in the exponent of the number, found " + found(i_));
             while (is_digit(peek())) ++i_;
         }
-        std::string digits_text = negative ? "-" : "";
-        digits_text.append(s_.substr(body, i_ - body));
+        // The digits as written, without a copy; the sign is applied after
+        // (exact), so "- 5" (a space after the sign) reads as -5 too.
         double v = 0;
-        const auto r = std::from_chars(digits_text.data(), digits_text.data() + digits_text.size(), v,
-                                       std::chars_format::general);
-        if (r.ec == std::errc::result_out_of_range)
-            fail(start, "the number " + digits_text + " is outside the range of double-precision numbers");
-        if (r.ec != std::errc() || r.ptr != digits_text.data() + digits_text.size())
+        const char* first = s_.data() + body;
+        const char* last = s_.data() + i_;
+        const auto r = std::from_chars(first, last, v, std::chars_format::general);
+        if (r.ec != std::errc() || r.ptr != last) {
+            std::string digits_text = negative ? "-" : "";
+            digits_text.append(first, last);
+            if (r.ec == std::errc::result_out_of_range)
+                fail(start, "the number " + digits_text + " is outside the range of double-precision numbers");
             fail(start, "the number " + digits_text + " could not be read");
+        }
+        if (negative) v = -v;
         return v;
     }
 
@@ -331,7 +375,7 @@ std::string element_text(const Value& v) {
 
 }  // namespace
 
-ParsedCall parse(std::string_view text) { return Parser(text).call(); }
+ParsedCall parse(std::string_view text, bool allow_names) { return Parser(text, allow_names).call(); }
 
 Table evaluate(std::string_view text) {
     try {

@@ -56,10 +56,18 @@ private:
 struct ParsedCall {
     const catalogue::Function* function = nullptr;  // never null after a successful parse
     std::vector<Table> args;                        // one Table per argument, as call() takes them
+    // With names allowed (below): per argument, the name written there, or ""
+    // (its Table is then an empty cell, a placeholder). Empty otherwise.
+    std::vector<std::string> names;
 };
 
 // Parses one call text. Throws ParseError.
-ParsedCall parse(std::string_view text);
+// allow_names: an argument may also be a name, for the command line's CSV
+// mode, where names are column names: a word of letters, digits, '.' and
+// '_' that starts with a letter (other than TRUE and FALSE), or any text in
+// square brackets, "]]" for a ']' inside: [HP steam pressure]. Names are not
+// allowed inside arrays.
+ParsedCall parse(std::string_view text, bool allow_names = false);
 
 // Parses and evaluates. Never throws: a parse error comes back as a 1x1
 // error table whose text is the ParseError's what().
