@@ -18,74 +18,12 @@
 
 #include "isentra/surface/catalogue.hpp"
 #include "isentra/units/units.hpp"
+#include "cli_run.hpp"
 
 namespace {
 
-struct Outcome {
-    int status = -1;               // exit code
-    std::string out, err;          // standard output and standard error
-    std::vector<std::string> lines;  // standard output split at '\n' (the last '\n' ends the last line)
-};
-
-std::string quote(const std::string& s) {
-    std::string q = "'";
-    for (char c : s) {
-        if (c == '\'') q += "'\\''";
-        else q += c;
-    }
-    return q + "'";
-}
-
-std::string read_file(const std::string& path) {
-    std::ifstream f(path, std::ios::binary);
-    std::ostringstream ss;
-    ss << f.rdbuf();
-    return ss.str();
-}
-
-// Runs isentra with the arguments, the text on standard input.
-Outcome run(const std::vector<std::string>& args, const std::string& input = "") {
-    char in_name[] = "/tmp/isentra_cli_in_XXXXXX";
-    char err_name[] = "/tmp/isentra_cli_err_XXXXXX";
-    const int in_fd = mkstemp(in_name);
-    const int err_fd = mkstemp(err_name);
-    Outcome r;
-    if (in_fd < 0 || err_fd < 0) {
-        ADD_FAILURE() << "mkstemp failed";
-        return r;
-    }
-    if (!input.empty() && write(in_fd, input.data(), input.size()) != static_cast<ssize_t>(input.size()))
-        ADD_FAILURE() << "write failed";
-    close(in_fd);
-    close(err_fd);
-    std::string cmd = quote(ISENTRA_CLI_PATH);
-    for (const std::string& a : args) cmd += " " + quote(a);
-    cmd += " <" + quote(in_name) + " 2>" + quote(err_name);
-    FILE* p = popen(cmd.c_str(), "r");
-    if (!p) {
-        ADD_FAILURE() << "popen failed: " << cmd;
-        return r;
-    }
-    char buf[4096];
-    std::size_t n;
-    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0) r.out.append(buf, n);
-    const int st = pclose(p);
-    r.status = WIFEXITED(st) ? WEXITSTATUS(st) : -1;
-    r.err = read_file(err_name);
-    std::remove(in_name);
-    std::remove(err_name);
-    std::string line;
-    for (char c : r.out) {
-        if (c == '\n') {
-            r.lines.push_back(line);
-            line.clear();
-        } else {
-            line += c;
-        }
-    }
-    EXPECT_TRUE(line.empty()) << "output does not end with a newline: " << r.out;
-    return r;
-}
+using isentra::clitest::Outcome;
+using isentra::clitest::run;
 
 bool starts_with(const std::string& s, const std::string& p) { return s.rfind(p, 0) == 0; }
 bool contains(const std::string& s, const std::string& p) { return s.find(p) != std::string::npos; }
