@@ -152,9 +152,8 @@ std::string lower(std::string s) {
 
 Arg detail::units_arg() {
     return Arg{"units", Quantity::Text,
-               "Optional unit system for all inputs and the result: \"SI\" (default: MPa, degC, kJ/kg), "
-               "\"US\" (psia, degF, Btu/lbm), \"BAR\", \"KPA\", \"K\"; single quantities can be "
-               "overridden, e.g. \"US p=psig\" or \"SI p=barg patm=0.0985MPa\". May be a cell reference.",
+               "Optional units of all inputs and the result: \"SI\" (default), \"US\", \"BAR\", \"KPA\" or "
+               "\"K\", with overrides such as \"US p=psig\" or \"SI p=barg\". May be a cell.",
                true};
 }
 
@@ -223,11 +222,9 @@ void add_saturation_family(std::vector<Function>& out) {
                 f.name = std::string("STEAM.") + ps.code + side_code[side] + "." + in;
                 f.method = std::string(ps.method) + lower(side_code[side]) + in;
                 f.category = ps.transport ? "Steam transport properties" : "Steam saturation";
-                f.summary = std::string(side == 2 ? "The difference (saturated vapour minus saturated "
-                                                    "liquid) of the "
-                                                  : "") +
-                            (side == 2 ? std::string(ps.noun) : std::string(ps.noun)) +
-                            (side == 2 ? "" : std::string(" of ") + side_words[side]) +
+                f.summary = std::string(ps.noun) +
+                            (side == 2 ? std::string(" of saturated vapour minus saturated liquid")
+                                       : std::string(" of ") + side_words[side]) +
                             (by == 0 ? " at saturation pressure p" : " at saturation temperature T") +
                             " (IAPWS-IF97 region 4).";
                 f.summary[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(f.summary[0])));
@@ -371,7 +368,7 @@ std::vector<Function> build() {
         f.method = "explain";
         f.category = "Steam utilities";
         f.summary = "Explains, in one sentence and in your units, why a call of another STEAM function "
-                    "gives an error: =STEAM.EXPLAIN(\"H.PT\"; A2; B2; \"US\") repeats the call "
+                    "gives an error. For example =STEAM.EXPLAIN(\"H.PT\"; A2; B2; \"US\") repeats the call "
                     "STEAM.H.PT(A2; B2; \"US\") and returns its error sentence, or \"OK\" and the value.";
         f.args = {Arg{"function", Quantity::Text, "Name of the function, e.g. \"H.PT\" or \"STEAM.H.PT\""},
                   Arg{"arguments", Quantity::None,

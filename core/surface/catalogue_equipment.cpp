@@ -102,10 +102,10 @@ struct InletPair {
 
 void add_turbine_expansion(std::vector<Function>& out) {
     const InletPair inlets[] = {
-        {"PT", Arg{"T_in", Quantity::Temperature, d_T_in}, "inlet pressure and temperature (superheated steam)",
+        {"PT", Arg{"T_in", Quantity::Temperature, d_T_in}, "inlet p and T (superheated steam)",
          &eq::turbine_expansion_pT},
         {"PH", Arg{"h_in", Quantity::SpecificEnergy, d_h_in},
-         "inlet pressure and enthalpy (for wet steam, or an inlet known by its enthalpy)",
+         "inlet p and h (wet or superheated steam)",
          &eq::turbine_expansion_ph},
     };
     const std::string defn =
@@ -122,8 +122,9 @@ void add_turbine_expansion(std::vector<Function>& out) {
             Function f = row(("STEAM.TURBINE.EXPANSION." + code).c_str(), ("turbineExpansion" + code).c_str(),
                              cat_turbine,
                              "Steam turbine expansion from " + std::string(in.words) +
-                                 " to the outlet pressure with an isentropic efficiency, as one row: outlet h, "
-                                 "T, s, x, isentropic end point h_s and its x, and specific work h_in - h_out." +
+                                 " to the outlet pressure with an isentropic efficiency, as one row. The row: "
+                                 "outlet h, T, s, x, isentropic end point h_s and its x, and specific work h_in - "
+                                 "h_out." +
                                  defn +
                                  " A wet outlet has T = Tsat(p_out) and x below 1; x above 1 means superheated. "
                                  "Enter as an array formula over 7 cells; with header = 1 the first row holds "
@@ -149,20 +150,20 @@ void add_turbine_expansion(std::vector<Function>& out) {
             out.push_back(std::move(f));
         }
         out.push_back(number(("STEAM.TURBINE.HOUT." + code).c_str(), ("turbineHout" + code).c_str(), cat_turbine,
-                             "Outlet specific enthalpy of a steam turbine expansion from " + std::string(in.words) +
-                                 ", outlet pressure and isentropic efficiency: h_out = h_in - eta (h_in - h_s)." +
+                             "Outlet enthalpy of a turbine expansion from " + std::string(in.words) +
+                                 ", outlet p and isentropic efficiency. It is h_out = h_in - eta (h_in - h_s)." +
                                  defn,
                              args(), Quantity::SpecificEnergy,
                              [ex](const double* a, double* o) { o[0] = ex(a[0], a[1], a[2], a[3]).h_out; }));
         out.push_back(number(("STEAM.TURBINE.TOUT." + code).c_str(), ("turbineTout" + code).c_str(), cat_turbine,
-                             "Outlet temperature of a steam turbine expansion from " + std::string(in.words) +
-                                 ", outlet pressure and isentropic efficiency; for a wet outlet the saturation "
-                                 "temperature at p_out." + defn,
+                             "Outlet temperature of a turbine expansion from " + std::string(in.words) +
+                                 ", outlet p and isentropic efficiency. For a wet outlet it is the "
+                                 "saturation temperature at p_out." + defn,
                              args(), Quantity::Temperature,
                              [ex](const double* a, double* o) { o[0] = ex(a[0], a[1], a[2], a[3]).T_out; }));
         out.push_back(number(("STEAM.TURBINE.XOUT." + code).c_str(), ("turbineXout" + code).c_str(), cat_turbine,
-                             "Outlet vapour quality of a steam turbine expansion from " + std::string(in.words) +
-                                 ", outlet pressure and isentropic efficiency: below 1 for a wet outlet (1 - x "
+                             "Outlet vapour quality of a turbine expansion from " + std::string(in.words) +
+                                 ", outlet p and isentropic efficiency. Below 1 for a wet outlet (1 - x "
                                  "is the moisture), above 1 (equilibrium quality) for a superheated one; an error "
                                  "at or above the critical pressure." + defn,
                              args(), Quantity::None, [ex](const double* a, double* o) {
@@ -174,8 +175,9 @@ void add_turbine_expansion(std::vector<Function>& out) {
                                  o[0] = x;
                              }));
         out.push_back(number(("STEAM.TURBINE.WORK." + code).c_str(), ("turbineWork" + code).c_str(), cat_turbine,
-                             "Specific work of a steam turbine expansion, h_in - h_out = eta (h_in - h_s), from " +
-                                 std::string(in.words) + ", outlet pressure and isentropic efficiency." + defn,
+                             "Specific work h_in - h_out of a turbine expansion from " +
+                                 std::string(in.words) + ", outlet p and isentropic efficiency. It is "
+                                 "eta (h_in - h_s)." + defn,
                              args(), Quantity::SpecificEnergy,
                              [ex](const double* a, double* o) { o[0] = ex(a[0], a[1], a[2], a[3]).work; }));
     }
@@ -229,9 +231,9 @@ void add_section_efficiency(std::vector<Function>& out) {
         "the sensitivities d eta/d reading from the IAPWS-IF97 property derivatives; the result has the "
         "coverage of the uncertainties given (e.g. 95 %).";
     out.push_back(number("STEAM.TURBINE.EFF.UNC.PT.PT", "turbineEffUncPTPT", cat_turbine,
-                         "Uncertainty of a turbine section efficiency (as in STEAM.TURBINE.EFF.PT.PT) from the "
-                         "uncertainties of the inlet and outlet pressure and temperature readings, as a "
-                         "fraction (0.01 = 1 percentage point). Superheated outlets only (the outlet "
+                         "Uncertainty of a turbine section efficiency (STEAM.TURBINE.EFF.PT.PT) from those of its "
+                         "readings, as a fraction (0.01 = 1 percentage point). The "
+                         "readings are the inlet and outlet pressure and temperature. Superheated outlets only (the outlet "
                          "enthalpy of a wet exhaust comes from an energy balance, whose uncertainty this "
                          "function does not know)." +
                              method,
@@ -241,7 +243,7 @@ void add_section_efficiency(std::vector<Function>& out) {
                    .u_eta;
     };
     out.push_back(row("STEAM.TURBINE.EFF.BUDGET.PT.PT", "turbineEffBudgetPTPT", cat_turbine,
-                      "Uncertainty budget of a turbine section efficiency as one row: efficiency, its "
+                      "Uncertainty budget of a turbine section efficiency as one row. The row: efficiency, its "
                       "uncertainty, each reading's contribution |theta_i u_i| (in efficiency units like u_eta: 0.001 = 0.1 "
                       "percentage point) and "
                       "its share of the total (theta_i u_i)^2/u^2 in % (the shares add up to 100)." +
@@ -407,7 +409,7 @@ void add_valve(std::vector<Function>& out) {
                              [fn](const double* a, double* o) { o[0] = fn(a[0], a[1], a[2]).T_out; }));
         out.push_back(number(("STEAM.VALVE.XOUT." + code).c_str(), ("valveXout" + code).c_str(), cat_equipment,
                              "Vapour quality after throttling through a valve from " + std::string(v.words) +
-                                 " to the outlet pressure (equilibrium quality): between 0 and 1 wet, above 1 "
+                                 " to the outlet pressure (equilibrium quality). Between 0 and 1 wet, above 1 "
                                  "superheated, below 0 subcooled liquid (a liquid inlet that does not flash); an "
                                  "error at or above the critical pressure." + defn,
                              args(), Quantity::None, [fn](const double* a, double* o) {
@@ -465,9 +467,9 @@ void add_mixing(std::vector<Function>& out) {
                       }));
     out.push_back(number(
         "STEAM.DESUPERHEATER.SPRAY", "desuperheaterSpray", cat_equipment,
-        "Spray-water flow of a desuperheater for a target outlet temperature, from the energy balance "
-        "m_w = m_steam (h_steam - h_out)/(h_out - h_water); the outlet is at the steam pressure and must stay "
-        "superheated.",
+        "Spray-water flow of a desuperheater for a target outlet temperature, from its energy balance. "
+        "Formula: m_w = m_steam (h_steam - h_out)/(h_out - h_water); the outlet is at the steam pressure and "
+        "must stay superheated.",
         {m_arg("m_steam", "Steam flow entering the desuperheater (before the spray)"),
          p_arg("p_steam", "Steam pressure (also the outlet pressure)"),
          T_arg("T_steam", "Steam temperature before the spray (superheated)"),
@@ -483,14 +485,14 @@ void add_fwh(std::vector<Function>& out) {
     out.push_back(number(
         "STEAM.FWH.TTD", "fwhTTD", cat_equipment,
         "Terminal temperature difference of a closed feedwater heater, TTD = Tsat(p_shell) - T_fw_out (ASME "
-        "PTC 12.1), p_shell the extraction steam pressure at the heater inlet. Negative when the feedwater "
+        "PTC 12.1). Here p_shell is the extraction steam pressure at the heater inlet. Negative when the feedwater "
         "leaves hotter than Tsat (heaters with a desuperheating zone, typically a few K).",
         {p_arg("p_shell", "Heater shell pressure (extraction steam pressure at the heater inlet)"),
          T_arg("T_fw_out", "Feedwater outlet temperature")},
         Quantity::TemperatureDifference, [](const double* a, double* o) { o[0] = eq::fwh_ttd(a[0], a[1]); }));
     out.push_back(number("STEAM.FWH.DCA", "fwhDCA", cat_equipment,
                          "Drain cooler approach of a closed feedwater heater, DCA = T_drain - T_fw_in (ASME PTC "
-                         "12.1): drain outlet temperature minus feedwater inlet temperature. An error if the "
+                         "12.1). It is the drain outlet temperature minus the feedwater inlet temperature. An error if the "
                          "drain is colder than the feedwater inlet.",
                          {T_arg("T_drain", "Drain outlet temperature"), T_arg("T_fw_in", "Feedwater inlet temperature")},
                          Quantity::TemperatureDifference,
@@ -504,9 +506,9 @@ void add_fwh(std::vector<Function>& out) {
                          [](const double* a, double* o) { o[0] = eq::fwh_rise(a[0], a[1]); }));
     out.push_back(number(
         "STEAM.FWH.EXTRACTION", "fwhExtraction", cat_equipment,
-        "Extraction steam flow to a closed feedwater heater from its energy balance (ASME PTC 12.1): m_ext = "
-        "(m_fw (h_fw_out - h_fw_in) - m_casc (h_casc - h_drain)) / (h_ext - h_drain). Enthalpies from e.g. "
-        "STEAM.H.PT; m_casc and h_casc only for drains cascading in from the heater above.",
+        "Extraction steam flow to a closed feedwater heater from its energy balance (ASME PTC 12.1). It is "
+        "m_ext = (m_fw (h_fw_out - h_fw_in) - m_casc (h_casc - h_drain)) / (h_ext - h_drain). Enthalpies from "
+        "e.g. STEAM.H.PT; m_casc and h_casc only for drains cascading in from the heater above.",
         {m_arg("m_fw", "Feedwater flow through the heater"), h_arg("h_fw_in", "Feedwater inlet enthalpy"),
          h_arg("h_fw_out", "Feedwater outlet enthalpy"), h_arg("h_ext", "Extraction steam enthalpy at the heater inlet"),
          h_arg("h_drain", "Drain outlet enthalpy"),
@@ -577,7 +579,7 @@ void add_heat_rate(std::vector<Function>& out) {
     reheat(net);
     out.push_back(number("STEAM.HEATRATE.NET", "heatRateNet", cat_performance,
                          "Net unit heat rate (Q / eta_boiler) / (P_gen - P_aux): fuel heat per unit of net "
-                         "output, with the " + heat + ". Enthalpies from e.g. STEAM.H.PT.",
+                         "output. Here Q is the " + heat + ". Enthalpies from e.g. STEAM.H.PT.",
                          std::move(net), Quantity::HeatRate, [reheat_of](const double* a, double* o) {
                              const Reheat r = reheat_of(a + 6);
                              o[0] = eq::net_heat_rate(a[0], a[2], a[1], r.m, r.h_hrh, r.h_crh, a[3], a[4], a[5]);

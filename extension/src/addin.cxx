@@ -18,6 +18,7 @@
 
 #include "isentra/surface/call.hpp"
 #include "isentra/surface/catalogue.hpp"
+#include "wizard_text.hpp"
 
 namespace isentra::uno {
 
@@ -135,6 +136,22 @@ Table to_table(const Any& a) {
     return t;
 }
 
+// A required argument (sequence<sequence<any>>): Calc wraps a single value
+// (a number, a text, a one-cell reference) in a 1x1 array and passes a range
+// as its cells. An argument left empty inside the list, as in H.PT(1;), comes
+// as an empty array and counts as missing (Empty).
+Table to_table(const Sequence<Sequence<Any>>& rows) {
+    const sal_Int32 nr = rows.getLength();
+    if (nr == 0 || (nr == 1 && rows[0].getLength() == 0)) return Table::scalar(Value{});
+    if (nr == 1 && rows[0].getLength() == 1) return Table::scalar(to_value(rows[0][0]));
+    Table t;
+    if (!fill_rows(rows, t, &to_value))
+        return Table::scalar(Value::of_error(ErrorCode::InvalidArgument, "an argument is a non-rectangular array"));
+    return t;
+}
+
+Table to_table(const Param& p) { return p.rows ? to_table(*p.rows) : to_table(*p.any); }
+
 // ---- Table -> any -------------------------------------------------------------
 
 // An error element inside an array result. Calc has no way to show an
@@ -158,7 +175,7 @@ Any element(const Value& v) {
 
 SteamFunctions::SteamFunctions(const css::uno::Reference<css::uno::XComponentContext>&) {}
 
-Any SteamFunctions::dispatch(std::size_t index, const Any* const* args, std::size_t nargs,
+Any SteamFunctions::dispatch(std::size_t index, const Param* args, std::size_t nargs,
                              const Sequence<Any>* rest) {
     try {
         const auto& fs = cat::functions();
@@ -167,14 +184,15 @@ Any SteamFunctions::dispatch(std::size_t index, const Any* const* args, std::siz
 
         std::vector<Table> in;
         in.reserve(nargs + (rest ? static_cast<std::size_t>(rest->getLength()) : 0));
-        for (std::size_t i = 0; i < nargs; ++i) in.push_back(to_table(*args[i]));
+        for (std::size_t i = 0; i < nargs; ++i) in.push_back(to_table(args[i]));
         if (rest)
             for (sal_Int32 i = 0; i < rest->getLength(); ++i) in.push_back(to_table((*rest)[i]));
-        // Calc passes omitted trailing arguments as void anys: drop them, so
-        // that the core sees the call as written (and counts the arguments).
+        // Calc passes omitted trailing (optional, `any`) arguments as void
+        // anys: drop them, so that the core sees the call as written (and
+        // counts the arguments).
         if (!rest) {
             std::size_t n = nargs;
-            while (n > 0 && !args[n - 1]->hasValue()) --n;
+            while (n > 0 && args[n - 1].any && !args[n - 1].any->hasValue()) --n;
             in.resize(n);
         }
 
@@ -251,7 +269,7 @@ OUString SteamFunctions::getDisplayFunctionName(const OUString& aProgrammaticNam
 OUString SteamFunctions::getFunctionDescription(const OUString& aProgrammaticName) {
     return text_or_empty([&] {
         const cat::Function* f = by_method(aProgrammaticName);
-        return f ? to_ou(cat::describe_function(*f)) : OUString();
+        return f ? to_ou(wizard::function_text(*f)) : OUString();
     });
 }
 
@@ -265,7 +283,7 @@ OUString SteamFunctions::getDisplayArgumentName(const OUString& aProgrammaticNam
 OUString SteamFunctions::getArgumentDescription(const OUString& aProgrammaticName, sal_Int32 nArgument) {
     return text_or_empty([&] {
         const cat::Function* f = by_method(aProgrammaticName);
-        return valid_arg(f, nArgument) ? to_ou(cat::describe_arg(*f, static_cast<std::size_t>(nArgument)))
+        return valid_arg(f, nArgument) ? to_ou(wizard::arg_text(*f, static_cast<std::size_t>(nArgument)))
                                        : OUString();
     });
 }

@@ -26,6 +26,17 @@ using ::rtl::OString;
 using ::rtl::OUString;
 
 inline constexpr const char* service_name = "org.isentra.SteamFunctions";
+
+// One fixed argument as a generated method received it: a required argument
+// is declared sequence<sequence<any>> (Calc then marks it required in the
+// Function Wizard and refuses a call without it; a single value arrives as a
+// 1x1 array), an optional one `any` (omitted: a void any).
+struct Param {
+    const css::uno::Any* any = nullptr;
+    const css::uno::Sequence<css::uno::Sequence<css::uno::Any>>* rows = nullptr;
+    Param(const css::uno::Any& a) : any(&a) {}  // NOLINT: implicit on purpose (generated code)
+    Param(const css::uno::Sequence<css::uno::Sequence<css::uno::Any>>& r) : rows(&r) {}  // NOLINT
+};
 inline constexpr const char* implementation_name = "org.isentra.SteamFunctions.impl";
 
 class SteamFunctions
@@ -65,7 +76,7 @@ private:
     // converts the arguments (fixed ones, then the elements of a varargs
     // sequence), evaluates catalogue function `index` with isentra::call()
     // and converts the result back. Throws only UNO exceptions.
-    css::uno::Any dispatch(std::size_t index, const css::uno::Any* const* args, std::size_t nargs,
+    css::uno::Any dispatch(std::size_t index, const Param* args, std::size_t nargs,
                            const css::uno::Sequence<css::uno::Any>* rest);
 
     std::mutex mutex_;  // guards locale_

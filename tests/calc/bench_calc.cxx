@@ -13,7 +13,11 @@
 //   - 100,000 cells =SQRT(An)          (a built-in function),
 //   - one array formula =STEAM.H.PT(A1:A100000;B1:B100000) over 100,000 cells.
 // And, in this process, isentra::call() on the same states (the core and the
-// call layer without UNO and Calc).
+// call layer without UNO and Calc), and the glue's conversion of one cell's
+// arguments in the two declarations a parameter can have: a required
+// argument is a sequence<sequence<any>> (a single value comes as a 1x1
+// array), an optional one an `any` (the declaration of every argument before
+// issue 11). docs/performance.md compares the Calc figures of both builds.
 // Environment: ISENTRA_BENCH_ROWS (default 100000), ISENTRA_BENCH_REPEAT (default 3),
 // ISENTRA_BENCH_ONLY (a word: only the phases whose title contains it, e.g. "array").
 #include <algorithm>
@@ -276,6 +280,38 @@ TEST(CalcBench, HundredThousandCells) {
         }
         return t;
     };
+    // One cell's two arguments, as Calc passes them to a required argument
+    // (1x1 sequence<sequence<any>>) and to an `any`, turned into Tables.
+    std::vector<Sequence<Sequence<Any>>> cell_seq(static_cast<std::size_t>(n));
+    std::vector<Any> cell_any(static_cast<std::size_t>(n));
+    for (int i = 0; i < n; ++i) {
+        Sequence<Any> one(1);
+        one.getArray()[0] <<= p_of(i);
+        cell_seq[static_cast<std::size_t>(i)] = Sequence<Sequence<Any>>(&one, 1);
+        cell_any[static_cast<std::size_t>(i)] <<= p_of(i);
+    }
+    const double glue_cell_seq = best_of([&] {
+        double s = 0;
+        for (int i = 0; i < n; ++i) {
+            const Sequence<Sequence<Any>>& r = cell_seq[static_cast<std::size_t>(i)];
+            double v = 0;
+            r[0][0] >>= v;
+            std::vector<Table> in{Table::scalar(Value::of(v)), Table::scalar(Value::of(v))};
+            s += in[0].cells[0].number;
+        }
+        return s;
+    });
+    const double glue_cell_any = best_of([&] {
+        double s = 0;
+        for (int i = 0; i < n; ++i) {
+            double v = 0;
+            cell_any[static_cast<std::size_t>(i)] >>= v;
+            std::vector<Table> in{Table::scalar(Value::of(v)), Table::scalar(Value::of(v))};
+            s += in[0].cells[0].number;
+        }
+        return s;
+    });
+
     double glue_in = 0, glue_call = 0, glue_out = 0;
     {
         double bi = 1e300, bc = 1e300, bo = 1e300;
@@ -315,6 +351,8 @@ TEST(CalcBench, HundredThousandCells) {
     std::printf("  %-44s %8.3f us\n", "glue replay: 2 ranges of any -> Tables", us(glue_in));
     std::printf("  %-44s %8.3f us\n", "glue replay: call() over the column", us(glue_call));
     std::printf("  %-44s %8.3f us\n", "glue replay: Table -> sequence<sequence<any>>", us(glue_out));
+    std::printf("  %-44s %8.3f us\n", "one cell, 2 args as 1x1 arrays -> Tables", us(glue_cell_seq));
+    std::printf("  %-44s %8.3f us\n", "one cell, 2 args as any -> Tables", us(glue_cell_any));
     std::printf("\nratios:\n");
     std::printf("  H.PT cell / VERSION cell            %6.2f\n", hpt.seconds / ver.seconds);
     std::printf("  H.PT cell / FWH.RISE cell           %6.2f\n", hpt.seconds / rise.seconds);
