@@ -13,22 +13,28 @@
 //  * Densities and all thermodynamic inputs (rho, cp, cv, (d rho/d p)_T) come
 //    from IAPWS-IF97 (the State), as R12-08 Sec. 3 and R15-11 Sec. 3.1 ask
 //    for industrial use.
-//  * Viscosity. R12-08 Sec. 3 recommends mu_2 = 1 for industrial use, and
-//    states that with IF97 densities the error stays below the correlation's
+//  * Viscosity, the default (viscosity(), kinematic_viscosity(), prandtl(),
+//    transport(), the saturated values): R12-08 Sec. 3, "Recommendation for
+//    industrial application": Eq. 10 with mu_2 = 1, i.e. mu = mu_0 mu_1
+//    (Eqs. 11, 12) at the IF97 density. This is the viscosity column of
+//    R15-11 Tables 7-9 and the viscosity in the conductivity's Eq. 18, so
+//    mu, nu, lambda and Pr are mutually consistent. R12-08 Sec. 3 states that
+//    using IF97 densities adds an error smaller than the correlation's
 //    uncertainty except close to and inside the near-critical region of
-//    Eq. 13. Sec. 2.8 allows omitting mu_2 outside the near-critical region;
-//    its footnote 2 bounds the region outside which omitting it changes mu by
-//    less than 0.0051 %: T/K = sum_{i=0..3} a_i (rho/(kg/m3))^i. We therefore
-//    apply mu_2 (Eqs. 14-19) to single-phase region 1-3 states with
-//    T < T_b(rho) (the side of that curve that holds the critical point) and
-//    set mu_2 = 1 elsewhere. Inside, the correlation length xi (Eqs. 20-21)
-//    uses the IF97 (d rho/d p)_T at the state and, for zeta(T_R, rho), the
-//    industrial prescription of R15-11 Eq. 25 (the same xi as the
-//    conductivity, as R15-11 Sec. 2.7 prescribes; R12-08 gives no industrial
-//    form of zeta(T_R) because it sets mu_2 = 1). The IF97 derivative is
-//    limited per R15-11 Sec. 3.4 footnote 2. Near the critical point these
-//    values differ from R12-08 Table 5 (which uses IAPWS-95 derivatives) as
-//    IF97's derivatives differ from IAPWS-95's there.
+//    Eq. 13; there the enhancement mu_2 (omitted here) matters too.
+//  * Viscosity with the critical enhancement, on request only
+//    (viscosity_with_enhancement()): R12-08 Eq. 10 with mu_2 (Eqs. 14-19)
+//    applied to single-phase region 1-3 states with T < T_b(rho), the side
+//    of the R12-08 Sec. 2.8 footnote 2 curve T/K = sum_{i=0..3} a_i
+//    (rho/(kg/m3))^i that holds the critical point (outside it omitting mu_2
+//    changes mu by less than 0.0051 %, footnote 2), mu_2 = 1 elsewhere. The
+//    correlation length xi (Eqs. 20-21) uses the IF97 (d rho/d p)_T at the
+//    state and, for zeta(T_R, rho), the industrial prescription of R15-11
+//    Eq. 25 (the same xi as the conductivity, R15-11 Sec. 2.7; R12-08 gives
+//    no industrial zeta(T_R) because it sets mu_2 = 1). The IF97 derivative
+//    is limited per R15-11 Sec. 3.4 footnote 2. Near the critical point these
+//    values differ from R12-08 Table 5 (IAPWS-95 derivatives) as IF97's
+//    derivatives differ from IAPWS-95's there.
 //  * Thermal conductivity: the R15-11 industrial form: cp, cv and zeta(T, rho)
 //    from IF97, zeta(T_R, rho) from Eq. 25, mu in Eq. 18 from the R12-08
 //    industrial viscosity (mu_2 = 1, which R15-11 Tables 7-9 confirm), IF97
@@ -337,7 +343,14 @@ void require_regular(const PhaseData& d) {
                                                                                    std::string(" are"));
 }
 
+// R12-08 Sec. 3, industrial: mu_2 = 1.
 double mu_of(const PhaseData& d) {
+    require_regular(d);
+    return mu01_bar(d.rho / rho_star, d.T / T_star) * mu_star;
+}
+
+// R12-08 Eq. 10 with mu_2 inside the near-critical region of Sec. 2.8 footnote 2.
+double mu_enhanced_of(const PhaseData& d) {
     require_regular(d);
     const double rb = d.rho / rho_star, Tb = d.T / T_star;
     double m = mu01_bar(rb, Tb);
@@ -348,7 +361,7 @@ double mu_of(const PhaseData& d) {
 double lambda_of(const PhaseData& d) {
     require_regular(d);
     const double rb = d.rho / rho_star, Tb = d.T / T_star;
-    const double mu_ind = mu01_bar(rb, Tb) * mu_star;  // R15-11 Sec. 3.1: industrial viscosity
+    const double mu_ind = mu01_bar(rb, Tb) * mu_star;  // R15-11 Sec. 3.1: industrial viscosity (= mu_of)
     return terms(d.rho, d.T, d.cp, d.cv, mu_ind, d.drhodp * zeta_scale, zeta_TR_bar(rb),
                  d.region != 5)
         .lambda;
@@ -405,6 +418,7 @@ double conductivity_rhoT(double rho, double T, double cp, double cv, double mu,
 // ---- On a state ------------------------------------------------------------------
 
 double viscosity(const State& st) { return mu_of(checked(st, Prop::Mu)); }
+double viscosity_with_enhancement(const State& st) { return mu_enhanced_of(checked(st, Prop::Mu)); }
 double conductivity(const State& st) { return lambda_of(checked(st, Prop::Lambda)); }
 double kinematic_viscosity(const State& st) {
     const PhaseData d = checked(st, Prop::Nu);

@@ -109,7 +109,7 @@ TEST(TransportViscosity, R12_08_Table5_Mu2FromTableXi) {
 }
 
 TEST(TransportViscosity, R12_08_Table5_WithIf97Derivatives) {
-    // What the industrial route (IF97 region-3 derivative at (rho, T), R15-11
+    // What viscosity_with_enhancement (the industrial route (IF97 region-3 derivative at (rho, T), R15-11
     // Eq. 25 at T_R) gives at the R12-08 Table 5 points. IF97's derivatives
     // differ from IAPWS-95's near the critical point, so xi differs (e.g.
     // 12.47 nm instead of 16.59 nm at 322 kg/m3, cf. R15-11 Table 9), and mu
@@ -122,7 +122,7 @@ TEST(TransportViscosity, R12_08_Table5_WithIf97Derivatives) {
     for (int i = 0; i < 6; ++i) {
         const if97::Props pr = if97::region3(rho[i], T);
         const State st = state_from(pr, pr.p >= if97::pc ? Phase::Supercritical : Phase::Vapour);
-        const double m = viscosity(st) * 1e6;
+        const double m = viscosity_with_enhancement(st) * 1e6;
         worst = std::max(worst, rel(m, mu[i]));
         EXPECT_LT(rel(m, mu[i]), 0.02) << rho[i];
     }
@@ -248,7 +248,17 @@ TEST(TransportConductivity, R15_11_Table9_FromRhoT) {
         EXPECT_LT(rel(pr.cv, r.cv), 1e-8);
         const State st = state_from(pr, pr.p >= if97::pc ? Phase::Supercritical : Phase::Vapour);
         EXPECT_LT(rel(conductivity(st) * 1e3, r.lambda), 1e-7) << r.rho;
+        // The default viscosity is the table's (industrial, mu_2 = 1) value.
+        EXPECT_LT(rel(viscosity(st) * 1e6, r.mu), 1e-8) << r.rho;
+        EXPECT_LT(rel(kinematic_viscosity(st) * 1e6 * r.rho, r.mu), 1e-8) << r.rho;
     }
+    // With the enhancement (on request only) it is larger: by 0.38 % at
+    // 222 kg/m3 and 7.5 % at 322 kg/m3 (the figures the catalogue quotes).
+    const if97::Props a = if97::region3(222, 647.35), b = if97::region3(322, 647.35);
+    const double ra = viscosity_with_enhancement(state_from(a, Phase::Supercritical)) * 1e6 / kTable9[0].mu;
+    const double rb = viscosity_with_enhancement(state_from(b, Phase::Supercritical)) * 1e6 / kTable9[1].mu;
+    EXPECT_NEAR(ra - 1, 0.0038, 0.0005);
+    EXPECT_NEAR(rb - 1, 0.075, 0.001);
 }
 
 TEST(TransportConductivity, Region5HasNoCriticalEnhancement) {
@@ -260,20 +270,41 @@ TEST(TransportConductivity, Region5HasNoCriticalEnhancement) {
 }
 
 // ---------------------------------------------------------------------------
-// Where the viscosity critical enhancement is applied
+// The default viscosity is R12-08 Sec. 3 (mu_2 = 1); the enhancement only on request
 // ---------------------------------------------------------------------------
 
+TEST(TransportViscosity, DefaultIsIndustrialEverywhere) {
+    // R12-08 Sec. 3: mu = mu_0 mu_1 at the IF97 density, also next to the
+    // critical point (22.5 MPa, 647.5 K) and at 25.16 MPa, 387 degC, where
+    // the enhancement would add about 0.2 %. nu, Pr and the mu inside
+    // lambda's Eq. 18 use the same value.
+    for (auto pt : {std::pair<double, double>{0.1, 300}, {10, 500}, {1, 700}, {50, 700}, {25, 650},
+                    {22.5, 647.5}, {25.16, 660.15}, {22.064, 648.0}}) {
+        const State st = state_pT(pt.first, pt.second);
+        const double mu = viscosity_rhoT(st.rho, st.T);
+        EXPECT_EQ(viscosity(st), mu) << pt.first << " " << pt.second;
+        EXPECT_EQ(kinematic_viscosity(st), mu / st.rho) << pt.first << " " << pt.second;
+        EXPECT_EQ(prandtl(st), mu * st.cp * 1e3 / conductivity(st)) << pt.first << " " << pt.second;
+        const ConductivityTerms t = conductivity_terms(st.rho, st.T, st.cp, st.cv, mu, st.drhodp_T,
+                                                       drhodp_TR_industrial(st.rho));
+        EXPECT_EQ(conductivity(st), t.lambda) << pt.first << " " << pt.second;
+        EXPECT_EQ(transport(st).mu, mu);
+    }
+}
+
 TEST(TransportViscosity, EnhancementOnlyNearCritical) {
-    // Far from the critical point mu = mu_0 mu_1 exactly (R12-08 Sec. 3).
+    // viscosity_with_enhancement: far from the critical point mu_2 = 1 exactly
+    // (outside R12-08 Sec. 2.8 footnote 2's region).
     for (auto pt : {std::pair<double, double>{0.1, 300}, {10, 500}, {1, 700}, {50, 700}, {25, 650}}) {
         const State st = state_pT(pt.first, pt.second);
         if (st.T < 640 || st.T > 720 || st.rho < 150 || st.rho > 550) {
-            EXPECT_EQ(viscosity(st), viscosity_rhoT(st.rho, st.T)) << pt.first << " " << pt.second;
+            EXPECT_EQ(viscosity_with_enhancement(st), viscosity_rhoT(st.rho, st.T)) << pt.first << " " << pt.second;
         }
     }
     // Near it (IAPWS R12-08 Eq. 13 box) mu_2 > 1 with IF97 derivatives.
     const State st = state_pT(22.5, 647.5);
-    EXPECT_GT(viscosity(st), viscosity_rhoT(st.rho, st.T) * 1.001);
+    EXPECT_GT(viscosity_with_enhancement(st), viscosity_rhoT(st.rho, st.T) * 1.001);
+    EXPECT_EQ(viscosity(st), viscosity_rhoT(st.rho, st.T));
     // Along the boundary of R12-08 Sec. 2.8 footnote 2 (where we switch
     // mu_2 on), mu_2 computed the industrial way is ~1: the switch leaves a
     // jump of at most 6e-5 relative (the release quotes < 0.0051 % for
@@ -464,12 +495,11 @@ TEST(TransportOracle, Iapws97Python) {
     // 1 kPa-100 MPa), 400 more around the critical point (640-720 K,
     // 18-40 MPa), 200 in region 5 up to 1173.15 K, and saturated liquid and
     // vapour at 300 temperatures 273.16-623.15 K.
-    // Near-critical band: inside the region of R12-08 Sec. 2.8 footnote 2 we
-    // apply mu_2 and the library (following R12-08 Sec. 3) sets mu_2 = 1;
-    // there mu is left out of the direct comparison and compared after
-    // dividing out our mu_2 (which must stay below 1.05 in these states).
-    // Outside it mu_2 must be exactly 1. lambda is compared everywhere: both
-    // follow the R15-11 industrial form. The library's region-3 saturated
+    // mu: both sides follow R12-08 Sec. 3 (mu_2 = 1) everywhere, so mu is
+    // compared directly; viscosity_with_enhancement is checked to equal it
+    // outside the region of R12-08 Sec. 2.8 footnote 2 and to stay within
+    // 5 % above it inside. lambda: both follow the R15-11 industrial form. The
+    // library's region-3 saturated
     // densities are not exact solutions of IF97 Eq. 28 (~1e-5 off), so the
     // generator stops saturation at 623.15 K.
     // Tolerance 1e-9 relative: both sides use IF97 and the same correlations,
@@ -513,16 +543,19 @@ TEST(TransportOracle, Iapws97Python) {
                 EXPECT_LT(rel(surface_tension(T), sg), 1e-9) << line;
             }
         }
-        const double mu2 = t.mu / viscosity_rhoT(rho, T);
-        if (region != 5 && inside_mu2_region(rho, T)) {
-            ++n_mu2;
-            max_mu2 = std::max(max_mu2, mu2);
-            EXPECT_GE(mu2, 1.0) << line;
-            EXPECT_LT(mu2, 1.05) << line;
-        } else {
-            EXPECT_EQ(mu2, 1.0) << line;
+        EXPECT_EQ(t.mu, viscosity_rhoT(rho, T)) << line;
+        if (kind == "pT") {
+            const double mu2 = viscosity_with_enhancement(state_pT(p, T)) / t.mu;
+            if (region != 5 && inside_mu2_region(rho, T)) {
+                ++n_mu2;
+                max_mu2 = std::max(max_mu2, mu2);
+                EXPECT_GE(mu2, 1.0) << line;
+                EXPECT_LT(mu2, 1.05) << line;
+            } else {
+                EXPECT_EQ(mu2, 1.0) << line;
+            }
         }
-        const double dmu = rel(t.mu / mu2, mu), dk = rel(t.lambda, k);
+        const double dmu = rel(t.mu, mu), dk = rel(t.lambda, k);
         max_mu = std::max(max_mu, dmu);
         max_k = std::max(max_k, dk);
         EXPECT_LT(dmu, 1e-9) << line;
@@ -535,7 +568,7 @@ TEST(TransportOracle, Iapws97Python) {
     RecordProperty("max_rel_dev_mu", g(max_mu));
     RecordProperty("max_rel_dev_lambda", g(max_k));
     RecordProperty("max_rel_dev_sigma", g(max_sigma));
-    std::printf("transport oracle: %d rows (%d with mu_2 applied, max mu_2 %.4f), max rel dev "
+    std::printf("transport oracle: %d rows (%d inside the mu_2 region, max mu_2 %.4f), max rel dev "
                 "mu %.2g, lambda %.2g, sigma %.2g\n",
                 n, n_mu2, max_mu2, max_mu, max_k, max_sigma);
 }

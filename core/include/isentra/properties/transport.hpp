@@ -1,8 +1,10 @@
 // SPDX-License-Identifier: MPL-2.0
 // Transport and interfacial properties of water and steam.
-//   viscosity:            IAPWS R12-08, industrial use (IF97 densities), with the
-//                         critical enhancement mu_2 inside the near-critical
-//                         region of R12-08 Sec. 2.8 (footnote 2), mu_2 = 1 outside
+//   viscosity:            IAPWS R12-08 Sec. 3, industrial use: IF97 densities,
+//                         mu_2 = 1 (the default everywhere: mu, nu, Pr, and the
+//                         mu inside lambda's Eq. 18); on request the full
+//                         Eq. 10 with mu_2 near the critical point
+//                         (viscosity_with_enhancement)
 //   thermal conductivity: IAPWS R15-11, industrial formulation (Sec. 3, IF97-based)
 //   surface tension:      IAPWS R1-76(2014)
 // Units: Pa s, W/(m K), N/m, m2/s. Inputs in core units (p MPa, T K, rho kg/m3,
@@ -36,7 +38,7 @@ double correlation_length(double rho, double T, double drhodp_T_at_T, double drh
 double viscosity_enhancement(double xi);
 
 // Full R12-08 Eq. 10, mu_0 mu_1 mu_2, with xi from the given derivatives (Pa s).
-// Applies mu_2 wherever it is called; the State functions decide where.
+// Applies mu_2 wherever it is called (see viscosity_with_enhancement).
 double viscosity_rhoT(double rho, double T, double drhodp_T_at_T, double drhodp_T_at_TR);
 
 // R15-11 Eq. 15 (W/(m K)). mu in Pa s is the viscosity used in Eq. 18 (the
@@ -62,7 +64,13 @@ ConductivityTerms conductivity_terms(double rho, double T, double cp, double cv,
 // Single-phase states and saturated ends (x = 0 or 1 on the saturation line).
 // A wet mixture (0 < x < 1) throws Error(NotDefined) naming the
 // saturated-liquid and -vapour functions; outside the range, RangeError.
-double viscosity(const State& st);             // Pa s
+double viscosity(const State& st);             // Pa s, R12-08 Sec. 3 (mu_2 = 1)
+// R12-08 Eq. 10 with the critical enhancement mu_2 (Eqs. 14-21, xi from IF97
+// and R15-11 Eq. 25) inside the near-critical region of R12-08 Sec. 2.8
+// footnote 2, mu_2 = 1 outside it (a change below 0.0051 % there). Equal to
+// viscosity(st) except there; larger next to the critical point (0.38 % at
+// 647.35 K and 222 kg/m3, 7.5 % at 322 kg/m3, 8.6 % at 22.065 MPa, 647.097 K).
+double viscosity_with_enhancement(const State& st);  // Pa s
 double conductivity(const State& st);          // W/(m K)
 double kinematic_viscosity(const State& st);   // mu / rho, m2/s
 double thermal_diffusivity(const State& st);   // lambda / (rho cp), m2/s
