@@ -883,4 +883,92 @@ double quality(const State& st) {
     return (st.h - sat.liq.h) / (sat.vap.h - sat.liq.h);
 }
 
+// ---- Metastable vapour, R7-97(2012) Section 6.2 -------------------------------
+
+namespace {
+
+void check_p_metastable(double p) {
+    check_finite("p", Quantity::Pressure, p);
+    if (!(p >= pt && p <= p_max_metastable))
+        throw RangeError("p", Quantity::Pressure, p, pt, p_max_metastable,
+                         "(the metastable-vapour equation of IAPWS-IF97, Eq. 18, is valid from the triple-point "
+                         "pressure to 10 MPa)");
+}
+
+const char* const metastable_context =
+    "(the metastable-vapour region of IAPWS-IF97 Eq. 18 at this pressure: from the 5 % equilibrium-moisture "
+    "line to the saturated-vapour line; above the saturation temperature the vapour is stable, use the "
+    "ordinary functions)";
+
+State metastable_state(double p, double T) {
+    State st = from_props(region2_metastable(p, T), p);
+    st.metastable = true;
+    return st;
+}
+
+}  // namespace
+
+MetastableLimits metastable_limits(double p) {
+    check_p_metastable(p);
+    const double Ts = tsat(p);  // p <= 10 MPa: Ts <= 584.15 K, regions 1 and 2 at saturation
+    const double hf = region1(p, Ts).h, hg = region2(p, Ts).h;
+    const double h95 = hf + 0.95 * (hg - hf);  // the 5 % equilibrium-moisture line
+    const auto f = [&](double T) { return region2_metastable(p, T).h - h95; };
+    // Bracket the 5 % line below Ts by steps of 5 K (h of Eq. 18 rises with T).
+    double hi = Ts, lo = Ts - 5.0;
+    while (f(lo) > 0.0) {
+        hi = lo;
+        lo -= 5.0;
+        if (lo < 100.0) throw Error(ErrorCode::NoConvergence, "no 5 % equilibrium-moisture line found");
+    }
+    MetastableLimits m;
+    m.T_low = solve_bracket(f, lo, hi, "the 5 % equilibrium-moisture line");
+    m.T_high = Ts;
+    const Props a = region2_metastable(p, m.T_low), b = region2_metastable(p, Ts);
+    m.h_low = a.h;
+    m.h_high = b.h;
+    m.s_low = a.s;
+    m.s_high = b.s;
+    return m;
+}
+
+State state_pT_metastable(double p, double T) {
+    check_p_metastable(p);
+    check_finite("T", Quantity::Temperature, T);
+    // Quick acceptance without solving for the 5 % line: T <= Ts and the
+    // equilibrium quality from Eq. 18's h at least 0.95.
+    const double Ts = tsat(p);
+    if (T > 0.0 && T <= Ts) {
+        const State st = metastable_state(p, T);
+        const double hf = region1(p, Ts).h, hg = region2(p, Ts).h;
+        if ((st.h - hf) / (hg - hf) >= 0.95) return st;
+    }
+    // Otherwise the limits decide (T on the computed 5 % line itself passes).
+    const MetastableLimits m = metastable_limits(p);
+    if (T >= m.T_low && T <= m.T_high) return metastable_state(p, T);
+    throw RangeError("T", Quantity::Temperature, T, m.T_low, m.T_high, metastable_context);
+}
+
+namespace {
+
+State metastable_py(double p, double y, Y which) {
+    check_p_metastable(p);
+    check_finite(yname(which), yq(which), y);
+    const MetastableLimits m = metastable_limits(p);
+    const double ylo = which == Y::H ? m.h_low : m.s_low, yhi = which == Y::H ? m.h_high : m.s_high;
+    if (!(y >= ylo && y <= yhi)) throw RangeError(yname(which), yq(which), y, ylo, yhi, metastable_context);
+    const auto f = [&](double T) {
+        const Props pr = region2_metastable(p, T);
+        return std::make_pair(yval(pr, which) - y, ydT(pr, which));
+    };
+    const double guess = m.T_low + (m.T_high - m.T_low) * (y - ylo) / (yhi - ylo);
+    const double T = solve_newton(f, guess, m.T_low, m.T_high, "the metastable-vapour temperature");
+    return metastable_state(p, T);
+}
+
+}  // namespace
+
+State state_ph_metastable(double p, double h) { return metastable_py(p, h, Y::H); }
+State state_ps_metastable(double p, double s) { return metastable_py(p, s, Y::S); }
+
 }  // namespace isentra

@@ -86,7 +86,7 @@ const PropSpec props[] = {
     {Prop::KAPPA, "KAPPA", "kappa", Quantity::None,
      "isentropic exponent (-v/p (dp/dv)s = w^2 rho / p)", false},
     {Prop::X, "X", "x", Quantity::None, "vapour quality", false},
-    {Prop::MU, "MU", "mu", Quantity::DynamicViscosity, "dynamic viscosity (IAPWS R12-08)", true},
+    {Prop::MU, "MU", "mu", Quantity::DynamicViscosity, "dynamic viscosity (IAPWS R12-08 industrial form)", true},
     {Prop::LAMBDA, "LAMBDA", "lambda", Quantity::ThermalConductivity,
      "thermal conductivity (IAPWS R15-11, industrial form)", true},
     {Prop::NU, "NU", "nu", Quantity::KinematicViscosity, "kinematic viscosity (mu/rho)", true},
@@ -187,6 +187,7 @@ void add_property_family(std::vector<Function>& out) {
             if (ps.transport)
                 f.summary += " Range: 0 to 900 °C (32 to 1652 °F), up to 50 MPa (7252 psia) above 800 °C, "
                              "the range of the IAPWS transport releases.";
+            if (ps.transport) f.note = detail::transport_note(ps.code);
             f.args = {Arg{pair.a->arg, pair.a->q, pair.a->description},
                       Arg{pair.b->arg, pair.b->q, pair.b->description}, units_arg()};
             f.result = ps.q;
@@ -228,6 +229,7 @@ void add_saturation_family(std::vector<Function>& out) {
                             (by == 0 ? " at saturation pressure p" : " at saturation temperature T") +
                             " (IAPWS-IF97 region 4).";
                 f.summary[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(f.summary[0])));
+                if (ps.transport) f.note = detail::transport_note(ps.code);
                 if (by == 0)
                     f.args = {Arg{"p", Quantity::Pressure,
                                   "Saturation pressure, from the triple point (611.657 Pa) to the critical "
@@ -341,12 +343,14 @@ std::vector<Function> build() {
                       "Saturation temperature, from the triple point 273.16 K to 647.096 K"},
                   units_arg()};
         f.result = Quantity::SurfaceTension;
+        f.note = detail::transport_note("SIGMA");
         f.eval = [](const double* a, double* o) { o[0] = surface_tension(a[0]); };
         out.push_back(std::move(f));
     }
     add_property_family(out);
     add_state_family(out);
     detail::add_equipment_family(out);
+    detail::add_supplementary_family(out);
     {
         Function f;
         f.name = "STEAM.CONVERT";

@@ -3,6 +3,7 @@
 // files. Each adds its functions, in a fixed order, to the list.
 #pragma once
 
+#include <string>
 #include <vector>
 
 #include "isentra/surface/catalogue.hpp"
@@ -11,6 +12,14 @@ namespace isentra::catalogue::detail {
 
 // Turbine and plant-equipment functions (catalogue_equipment.cpp).
 void add_equipment_family(std::vector<Function>& out);
+
+// Viscosity with the critical enhancement and the metastable-vapour family
+// (catalogue_supplementary.cpp).
+void add_supplementary_family(std::vector<Function>& out);
+
+// The documentation note of a transport property ("MU", "NU", "LAMBDA",
+// "ALPHA", "PR", "SIGMA"): release, section, simplification ("" otherwise).
+const char* transport_note(const std::string& code);
 
 // The optional "units" argument shared by all functions.
 Arg units_arg();

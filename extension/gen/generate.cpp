@@ -341,6 +341,7 @@ std::string functions_md(const std::vector<cat::Function>& fs) {
         for (const cat::Function& f : fs) {
             if (f.category != c) continue;
             o << "\n### " << f.name << "\n\n`" << signature(f) << "`\n\n" << md(cat::describe_function(f)) << "\n";
+            if (!f.note.empty()) o << "\n" << md(f.note) << "\n";
             if (f.kind == cat::ResultKind::Row) {
                 o << "\nResult columns:";
                 for (std::size_t i = 0; i < f.row_names.size(); ++i) {

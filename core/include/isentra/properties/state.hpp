@@ -38,6 +38,10 @@ struct State {
     double x = 0;
     int region = 0;  // 1, 2, 3, 4 (two-phase) or 5
     Phase phase = Phase::Liquid;
+    // True for a metastable (supersaturated) vapour state from the
+    // supplementary equation of region 2 (state_*_metastable); such a state
+    // has region 2, phase Vapour and lies below the saturation temperature.
+    bool metastable = false;
     // For a two-phase state: the saturated liquid (f) and vapour (g).
     if97::Props liq{}, vap{};
 };
@@ -77,6 +81,27 @@ State state_ps(double p, double s);
 State state_hs(double h, double s);
 State state_px(double p, double x);  // p <= pc, 0 <= x <= 1
 State state_Tx(double T, double x);  // T <= Tc, 0 <= x <= 1
+
+// ---- Metastable (supersaturated) vapour, R7-97(2012) Section 6.2 ----------
+// The supplementary equation of region 2 for the metastable-vapour region,
+// Eq. 18 (residual part Table 16, ideal part Eq. 16 with Table 10 footnote a).
+// Range of validity (R7-97(2012) Sec. 6.2): "from the saturated vapor line
+// to the 5 % equilibrium moisture line (determined from the equilibrium h'
+// and h'' values) at pressures from the triple-point pressure up to 10 MPa":
+// pt <= p <= 10 MPa and T between the temperature of the 5 % line and
+// Ts(p). Outside, RangeError (naming T, h or s with the limits at this p).
+// Results: region 2, phase Vapour, metastable = true, x NaN (quality() gives
+// the equilibrium quality, 0.95 to 1).
+inline constexpr double p_max_metastable = 10.0;  // MPa, R7-97(2012) Sec. 6.2
+struct MetastableLimits {
+    double T_low = 0, T_high = 0;  // K: on the 5 % equilibrium-moisture line, and Ts(p)
+    double h_low = 0, h_high = 0;  // kJ/kg, Eq. 18 at T_low and T_high
+    double s_low = 0, s_high = 0;  // kJ/(kg K), Eq. 18 at T_low and T_high
+};
+MetastableLimits metastable_limits(double p);  // range-checks p
+State state_pT_metastable(double p, double T);
+State state_ph_metastable(double p, double h);
+State state_ps_metastable(double p, double s);
 
 // Vapour quality of any state: inside the dome its x (0..1); outside it,
 // between the triple-point and critical pressures, the equilibrium quality

@@ -56,6 +56,9 @@ struct Function {
     std::string method;    // UNO method name, e.g. "hPT" (frozen once released)
     std::string category;  // Function Wizard category
     std::string summary;   // one sentence
+    // Longer documentation (source, section, simplification), shown in
+    // docs/functions.md only, not in the Function Wizard. May be empty.
+    std::string note;
     std::vector<Arg> args;
     Quantity result = Quantity::None;
     ResultKind kind = ResultKind::Number;
