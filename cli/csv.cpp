@@ -731,7 +731,7 @@ int run_csv(const std::vector<std::string>& args) {
     }
     if (!o.quiet) {
         std::fprintf(stderr, "isentra csv: %s rows in %.3f s", with_thousands(rows).c_str(), elapsed);
-        if (elapsed > 0 && rows > 0) std::fprintf(stderr, " (%s rows/s)", with_thousands(static_cast<unsigned long long>(static_cast<double>(rows) / elapsed)).c_str());
+        if (elapsed >= 0.05 && rows > 0) std::fprintf(stderr, " (%s rows/s)", with_thousands(static_cast<unsigned long long>(static_cast<double>(rows) / elapsed)).c_str());
         std::fputc('\n', stderr);
         for (const Column& c : r.columns) {
             if (c.error_rows == 0) std::fprintf(stderr, "isentra csv: %s: no errors\n", c.name.c_str());
