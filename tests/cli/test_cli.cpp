@@ -4,6 +4,7 @@
 // --list, --help, --version and exit codes.
 #include <gtest/gtest.h>
 
+#include <poll.h>
 #include <sys/wait.h>
 #include <unistd.h>
 
@@ -265,4 +266,44 @@ TEST(CliOptions, BadCallsExitWithZero) {
     EXPECT_EQ(r.status, 0);
     ASSERT_EQ(r.lines.size(), 3u);
     for (const auto& l : r.lines) EXPECT_TRUE(starts_with(l, "error: ")) << l;
+}
+
+// As a co-process: the answer to each line comes before the next line is sent.
+TEST(CliStdin, AnswersEachLineBeforeWaiting) {
+    int to_child[2], from_child[2];
+    ASSERT_EQ(pipe(to_child), 0);
+    ASSERT_EQ(pipe(from_child), 0);
+    const pid_t pid = fork();
+    ASSERT_GE(pid, 0);
+    if (pid == 0) {
+        dup2(to_child[0], 0);
+        dup2(from_child[1], 1);
+        close(to_child[1]);
+        close(from_child[0]);
+        execl(ISENTRA_CLI_PATH, ISENTRA_CLI_PATH, static_cast<char*>(nullptr));
+        _exit(127);
+    }
+    close(to_child[0]);
+    close(from_child[1]);
+    auto read_line = [&]() {
+        std::string line;
+        for (;;) {
+            pollfd pfd{from_child[0], POLLIN, 0};
+            if (poll(&pfd, 1, 10000) <= 0) return std::string("(no answer within 10 s)");
+            char c;
+            if (read(from_child[0], &c, 1) != 1) return line + "(end)";
+            if (c == '\n') return line;
+            line += c;
+        }
+    };
+    const std::string q1 = "TSAT(0.1; \"K\")\n", q2 = "nonsense\n";
+    ASSERT_EQ(write(to_child[1], q1.data(), q1.size()), static_cast<ssize_t>(q1.size()));
+    EXPECT_NEAR(number(read_line()), 372.755919, 5e-7);  // Tsat(0.1 MPa) = 372.755919 K: IAPWS R7-97(2012) Table 35
+    ASSERT_EQ(write(to_child[1], q2.data(), q2.size()), static_cast<ssize_t>(q2.size()));
+    EXPECT_EQ(read_line().substr(0, 7), "error: ");
+    close(to_child[1]);
+    int st = 0;
+    waitpid(pid, &st, 0);
+    close(from_child[0]);
+    EXPECT_TRUE(WIFEXITED(st) && WEXITSTATUS(st) == 0);
 }

@@ -349,3 +349,22 @@ TEST(CliCsv, MillionRowsAgreeWithTheLineMode) {
     }
     EXPECT_LT(errors, got.size() / 100);
 }
+
+TEST(CliCsv, ByteOrderMarkShortRowsQuietAndHeaderOnly) {
+    const TempFile in("\xEF\xBB\xBFp,T,note\n10,500\n10\n");
+    const Outcome r = run({"csv", "-q", in.path, "h=H.PT(p; T)"});
+    EXPECT_EQ(r.status, 0);
+    EXPECT_EQ(r.err, "");  // --quiet: no summary
+    ASSERT_EQ(r.lines.size(), 3u) << r.out;
+    EXPECT_EQ(r.lines[0], "\xEF\xBB\xBFp,T,note,h");  // the mark stays, the name p is found
+    EXPECT_NE(split(r.lines[1]).back(), "");          // a short row: the missing note is not used
+    EXPECT_EQ(r.lines[2], "10,");                      // T missing: empty result
+    const Outcome e = run({"csv", "--no-progress", "--errors", in.path, "h=H.PT(p; T)"});
+    ASSERT_EQ(e.lines.size(), 3u);
+    EXPECT_EQ(e.lines[2], "10,,the argument T is empty");
+    EXPECT_TRUE(contains(e.err, "h: 1 rows with errors")) << e.err;
+    const Outcome h = run({"csv", "h=H.PT(p; T)"}, "p,T\n");
+    EXPECT_EQ(h.status, 0);
+    EXPECT_EQ(h.out, "p,T,h\n");
+    EXPECT_TRUE(contains(h.err, "0 rows")) << h.err;
+}
