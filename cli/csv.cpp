@@ -676,8 +676,14 @@ int run_csv(const std::vector<std::string>& args) {
         while (p < end) {
             next = parse_record(p, end, in.eof(), o.delimiter, fields, content_end);
             if (!next) break;
+            // The record's own line break, or the header's when the input
+            // ends without one.
+            const std::string_view terminator =
+                next > content_end && next[-1] == '\n'
+                    ? std::string_view(content_end, static_cast<std::size_t>(next - content_end))
+                    : std::string_view(line_end);
             if (content_end == p) {  // a blank line: passed through
-                w.put(std::string_view(p, static_cast<std::size_t>(next - p)));
+                w.put(terminator);
                 p = next;
                 continue;
             }
@@ -688,8 +694,7 @@ int run_csv(const std::vector<std::string>& args) {
                 if (error) ++c.error_rows;
                 put_results(r, w, c, error);
             }
-            w.put(next > content_end ? std::string_view(content_end, static_cast<std::size_t>(next - content_end))
-                                     : std::string_view(line_end));
+            w.put(terminator);
             ++rows;
             p = next;
             if ((rows & 0xFFFF) == 0 && progress) {
