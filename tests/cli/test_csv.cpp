@@ -370,8 +370,9 @@ TEST(CliCsv, ByteOrderMarkShortRowsQuietAndHeaderOnly) {
 }
 
 // Random bytes from the characters that matter to a CSV reader: never a
-// crash or a hang, exit 0 (rows) or 2 (no usable header), and with exit 0
-// one output record per input record.
+// crash or a hang, exit 0 (rows) or 2 (no usable header); with exit 0 the
+// output begins with the header and new column (cli_run checks that it
+// ends with a line break), with exit 2 there is no output.
 TEST(CliCsv, RandomInputsNeverCrash) {
     const char alphabet[] = {'p', 'T', '1', '5', '.', ',', ';', '"', '\n', '\r', ' ', 'e', '-', 'B'};
     std::mt19937 rng(11);
