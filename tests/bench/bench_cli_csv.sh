@@ -103,8 +103,13 @@ for line in lines:  # the same work: read the row, compute h, write the row
 py_wall = time.perf_counter() - t0
 py_cpu = time.process_time() - c0
 py_rate = sample / py_cpu
-print("python3-iapws %s (Debian), IAPWS97(P=p, T=T+273.15).h per row, a %s-row sample timed:" % (
-    iapws.__version__, f"{sample:,}"))
+try:
+    deb = subprocess.run(["dpkg-query", "-W", "-f=${Version}", "python3-iapws"], capture_output=True,
+                         text=True).stdout or "?"
+except OSError:
+    deb = "?"
+print("python3-iapws (module %s, Debian package %s), IAPWS97(P=p, T=T+273.15).h per row, a %s-row sample timed:" % (
+    iapws.__version__, deb, f"{sample:,}"))
 print("  CPU %.3f s = %s rows/s; scaled to %s rows: %.0f s" % (py_cpu, f"{py_rate:,.0f}", f"{rows:,}", rows / py_rate))
 print("ratio (rows/s per core, isentra csv / python3-iapws): %s" % f"{(rows / best_cpu) / py_rate:,.0f}")
 EOF
