@@ -257,6 +257,10 @@ int parse_options(const std::vector<std::string>& args, Options& o) {
         std::string v, err;
         if (a == "-o" || a == "--output") {
             if (!need(o.output) || o.output.empty()) return usage(mode, "--output needs a file name");
+        } else if (a == "-i" || a == "--input") {
+            if (o.input_given) return usage(mode, "two input files; give one");
+            if (!need(o.input) || o.input.empty()) return usage(mode, "--input needs a file name");
+            o.input_given = true;
         } else if (a == "--units") {
             if (!need(o.units)) return usage(mode, "--units needs a unit text, e.g. --units US");
             o.units_given = true;

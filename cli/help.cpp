@@ -21,6 +21,7 @@ std::string csv_help() {
            "              gives the columns NAME.<element>.\n"
            "\n"
            "Options:\n"
+           "  -i, --input FILE       the input, however its name looks (also '-')\n"
            "  -o, --output FILE      write to FILE (default: standard output); FILE must not exist:\n"
            "                         no file is ever written over, and so never the input\n"
            "  --units TEXT           the units of every call that gives none itself, e.g. --units US or\n"

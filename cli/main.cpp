@@ -99,7 +99,8 @@ void print_help(std::FILE* out) {
          "  - an invalid call or input: \"error: \" and the explanation, in your units\n"
          "  - a row result or a range: the elements in row-major order, separated by tabs;\n"
          "    an element that has no value is \"error: \" and its explanation\n"
-         "Exit status: 0, however many calls gave errors; 2 for a usage error (unknown option).\n"
+         "Exit status: 0, however many calls gave errors; 2 for a usage error (unknown option);\n"
+         "1 if reading standard input or writing standard output fails.\n"
          "\n"
          "Units: the optional last text argument \"units\" sets the units of all inputs and the result.\n"
          "Systems:\n";

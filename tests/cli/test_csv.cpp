@@ -389,3 +389,18 @@ TEST(CliCsv, RandomInputsNeverCrash) {
         }
     }
 }
+
+TEST(CliCsv, InputOptionForAnyFileName) {
+    const TempFile dir_probe;  // a unique prefix
+    const std::string odd = dir_probe.path + "_h=H.PT(p).csv";
+    {
+        std::ofstream f(odd);
+        f << "p,T\n10,500\n";
+    }
+    const Outcome r = run({"csv", "--input", odd, "h=H.PT(p; T)"});
+    EXPECT_EQ(r.status, 0) << r.err;
+    ASSERT_EQ(r.lines.size(), 2u) << r.out;
+    EXPECT_EQ(r.lines[0], "p,T,h");
+    EXPECT_EQ(run({"csv", "-i", odd, "-i", odd, "h=H.PT(p; T)"}).status, 2);
+    std::remove(odd.c_str());
+}
