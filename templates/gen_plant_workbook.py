@@ -5,26 +5,41 @@
     gen_plant_workbook.py OUTDIR
 
 writes into OUTDIR:
-  harrow-fen-unit2-plant-performance.ods   the demo: invented readings of a routine
-                                           test of Harrow Fen Power Station, Unit 2
-  isentra-plant-performance.ots            the same workbook without readings: the
-                                           template the extension installs
+  harrow-fen-unit2-plant-performance.ods      the demo: invented readings of a routine
+                                              test of Harrow Fen Power Station, Unit 2, SI
+  harrow-fen-unit2-plant-performance-us.ods   the same test as a US plant reads it
+                                              (psia, °F, lbm/h, Btu/kWh), units cell "US"
+  isentra-plant-performance.ots               the workbook without readings, SI: the
+  isentra-plant-performance-us.ots            templates the extension installs (and US)
 
 Sheets:
   Heaters    closed feedwater heaters (one per column): TTD, DCA, temperature
              rise, test - design, enthalpies, extraction steam flow from the
-             heater's energy balance with cascading drains from the heater above
+             heater's energy balance with cascading drains from the heater
+             above; chart: TTD and DCA of each heater against design
   Pumps      boiler feed and condensate pump efficiency by the thermodynamic
              method, (h_s - h_in)/(h_out - h_in) with h_s = h(p_out, s_in),
              specific work, hydraulic and absorbed power
-  Heat rate  turbine cycle and net unit heat rate and efficiency per test run
+  Heat rate  turbine cycle and net unit heat rate and efficiency per test run;
+             chart: heat rate against load, test and design
 
-This script is the reviewable source of both files (standard library only;
+This script is the reviewable source of these files (standard library only;
 the build runs it with /usr/bin/python3). Every result is a formula of the
 Isentra add-in or plain Calc arithmetic on such results; the files carry no
-cached results, so Calc computes them on load. The units cell (Heaters.B5,
-"SI" or "US") is the units argument of every add-in call in all three sheets.
-Blank readings give empty results.
+cached results, so Calc computes them on load. The units cell (Heaters.B5)
+is the unit system the readings are entered in and the results come out in,
+for all sheets; it is the units argument of every add-in call (the heat rate
+calls add " P=MW": the outputs are read in MW).
+
+Blank readings never reach a call (a blank cell would arrive as 0): each
+column has "readings complete" cells (TRUE/FALSE, e.g. =COUNT(C10:C15)=6)
+under its readings, and every result is =IF(C$21; STEAM....; ""). Where an
+optional part of a call applies (cascading drains, reheat), a second IF picks
+the call with or without those arguments.
+
+Each sheet is written by its own function (heaters_sheet, pumps_sheet,
+heat_rate_sheet) returning a Sheet; document() puts them together with their
+charts.
 
 Harrow Fen Power Station is a made-up plant; the readings are invented.
 """
@@ -34,13 +49,12 @@ import sys
 sys.dont_write_bytecode = True  # keep templates/ free of __pycache__
 from odf_writer import (ADDIN, MIME_ODS, MIME_OTS, COMMON_STYLES, CELL_STYLES,  # noqa: E402
                         c_text, c_num, c_formula, c_empty, c_blank, c_span, row, table_style, column_style,
-                        content_xml, styles_xml, meta_xml, write_package)
+                        content_xml, styles_xml, meta_xml, write_package,
+                        chart_axis_style, chart_series_style, chart_stroke_dash, chart_object, chart_parts,
+                        chart_frame_cell)
 
 UNITS = "[$Heaters.$B$5]"  # the one units cell, as every formula refers to it
 US = f'UPPER({UNITS})="US"'
-KWH_US = "3412.14163312794"  # 1 kWh in Btu (IT): 3600 kJ / 1.05505585262 kJ/Btu (NIST SP 811 (2008) App. B)
-KW_US = KWH_US               # 1 kW in Btu/h, the same number
-KWH = "[.$C$23]"  # Heat rate sheet: the cell that holds 1 kWh in the heat rate's unit
 
 CAUTION = ("CAUTION: these figures evaluate a test; they approve nothing. Before a result feeds a design or an"
            " operating decision, a licensed engineer has to review it against the codes in force where the plant"
@@ -51,7 +65,39 @@ UNIT = {
     "p": ("MPa", "psia"), "T": ("°C", "°F"), "dT": ("K", "Δ°F"), "m": ("kg/s", "lbm/h"),
     "h": ("kJ/kg", "Btu/lbm"), "s": ("kJ/(kg·K)", "Btu/(lbm·°F)"), "hr": ("kJ/kWh", "Btu/kWh"),
     "kW": ("kW", "kW"), "MW": ("MW", "MW"), "-": ("", ""), "%": ("%", "%"), "name": ("", ""),
+    "check": ("", ""), "units": ("", ""),
 }
+
+# ---------------------------------------------------------------- US readings
+PSI_PER_MPA = 1e6 / 6894.757293168361   # 1 psi = 6894.757293168361 Pa (NIST SP 811 (2008) App. B)
+LBMH_PER_KGS = 3600 / 0.45359237        # 1 lbm = 0.45359237 kg (exact)
+KJ_PER_BTU = 1.05505585262              # international table Btu (NIST SP 811 (2008) App. B)
+
+
+def to_us(q, v, fine=False):
+    """A reading converted to US units and rounded as a plant instrument shows it:
+    pressures to four or five significant figures, temperatures to 0.1 °F (0.01 °F
+    with fine=True: pump temperatures), flows to 100 lbm/h, heat rates to 1 Btu/kWh."""
+    if v is None or isinstance(v, str):
+        return v
+    if q == "p":
+        x = v * PSI_PER_MPA
+        step = 1.0 if x >= 1000 else 0.1 if x >= 100 else 0.01 if x >= 10 else 0.001
+        return round(round(x / step) * step, 3)
+    if q == "T":
+        return round(v * 1.8 + 32, 2 if fine else 1)
+    if q == "dT":
+        return round(v * 1.8, 1)
+    if q == "m":
+        return round(v * LBMH_PER_KGS / 100) * 100.0
+    if q == "hr":
+        return float(round(v / KJ_PER_BTU))
+    return v  # MW, fractions, names
+
+
+def us_columns(columns, rows, fine=False):
+    """Demo columns (tuples of row values in the order of rows) converted to US units."""
+    return [tuple(to_us(q, v, fine) for (_, _, q), v in zip(rows, col)) for col in columns]
 
 
 def unit_cell(q):
@@ -65,24 +111,21 @@ def ref(col, r):
     return f"[.{col}{r}]"
 
 
-def call(method, *args):
-    return f"{ADDIN}{method}({';'.join(args)};{UNITS})"
+def call(method, *args, units=UNITS):
+    return f"{ADDIN}{method}({';'.join(args)};{units})"
 
 
 def when(cond, value):
     return f'IF({cond};{value};"")'
 
 
-def count_is(col, rows):
-    return f"COUNT({';'.join(ref(col, r) for r in rows)})={len(rows)}"
-
-
 class Sheet:
-    """Rows of one sheet, numbered as they are added (1-based)."""
+    """Rows of one sheet, numbered as they are added (1-based), and its charts."""
 
     def __init__(self, ncols):
         self.ncols = ncols  # columns A.. in use; notes span all of them
         self.rows = []
+        self.charts = []    # (frame name, chart content.xml, styles.xml, ranges, width cm, height cm)
 
     @property
     def next(self):
@@ -94,13 +137,16 @@ class Sheet:
         self.rows.append(row(cells))
         return len(self.rows)
 
-    def header(self, title, text, units_cell):
+    def header(self, title, text, units_cell, units_note=None):
         self.add([c_text(title, "title")])
         self.note(text)
         self.note(CAUTION, "caution_note")
         self.add([c_empty()])
         self.add(units_cell, expect=5)
-        self.add([c_empty()])
+        if units_note:
+            self.note(units_note, expect=6)
+        else:
+            self.add([c_empty()])
 
     def readings(self, rows, ncols, demo_values, blank_names):
         """Input rows [(row, label, quantity)], the first one the column names.
@@ -112,6 +158,14 @@ class Sheet:
                 v = demo_values[k][i] if demo_values else (blank_names[k] if i == 0 else None)
                 cells.append(input_cell(None if v == "" else v, INPUT_STYLE.get(q, "input")))
             self.add(cells, expect=n)
+
+    def checks(self, cols, checks_of):
+        """The "readings complete" rows: checks_of(column) -> [(row, label, formula)],
+        each TRUE or FALSE; the results refer to them."""
+        per_col = [checks_of(c) for c in cols]
+        for i, (n, label, _) in enumerate(per_col[0]):
+            self.add([c_text(label, "label"), c_blank("unit")] + [c_formula(ch[i][2], "check") for ch in per_col],
+                     expect=n)
 
     def results(self, head_label, name_row, cols, results_of, expect):
         """The results header row (the names from name_row) and one row per
@@ -126,6 +180,14 @@ class Sheet:
     def note(self, text, style="note", expect=None):
         """A paragraph across the whole width, wrapped."""
         return self.add([c_span(text, style, self.ncols)], expect)
+
+    def chart(self, name, content_styles, ranges, width, height, room_rows):
+        """A chart in column A of the next row, then room_rows empty rows for it to sit on."""
+        folder = f"Object {name}"  # renamed to Object N by document()
+        self.charts.append((name, content_styles, ranges))
+        self.add([chart_frame_cell(name, folder, ranges, width, height)])
+        for _ in range(room_rows):
+            self.add([c_empty()])
 
     def xml(self, name):
         cols = ('<table:table-column table:style-name="coA"/><table:table-column table:style-name="coB"/>'
@@ -145,11 +207,97 @@ def input_cell(v, style="input"):
 
 
 def linked_units_cell():
-    return [c_text("Units (set on sheet Heaters, cell B5)", "label"), c_formula(UNITS, "result", True)]
+    return [c_text("Units of the readings and results (set on sheet Heaters, cell B5)", "label"),
+            c_formula(UNITS, "result", True)]
 
 
 def version_row(sheet):
     sheet.add([c_text("Calculated with", "label"), c_formula(f"{ADDIN}VERSION()", "result", True)])
+
+
+def units_cell_row(system):
+    return [c_text("Units of the readings and results", "label"), c_text(system, "input"),
+            c_span("SI or US, for all sheets", "note", len(HEATER_COLS))]
+
+
+def units_note(system):
+    return ("The units cell B5 says which units every reading is entered in and every result comes out in."
+            " Changing it does not convert the readings already typed; it reads them in the other units."
+            " SI: MPa (absolute), °C, K, kg/s, kJ/kg, kJ/kWh.  US: psia, °F, Δ°F, lbm/h, Btu/lbm, Btu/kWh."
+            f" Powers in MW or kW either way. The charts' axis titles are fixed for {system}.")
+
+
+# ---------------------------------------------------------------- charts
+CHART_COMMON = [
+    '<style:style style:name="chA" style:family="chart"><style:graphic-properties draw:stroke="none" draw:fill-color="#ffffff"/></style:style>',
+    '<style:style style:name="chT" style:family="chart"><style:text-properties fo:font-size="10pt" fo:font-weight="bold"/></style:style>',
+    '<style:style style:name="chAt" style:family="chart"><style:text-properties fo:font-size="8pt"/></style:style>',
+    '<style:style style:name="chL" style:family="chart"><style:text-properties fo:font-size="8pt"/></style:style>',
+    '<style:style style:name="chW" style:family="chart"><style:graphic-properties draw:fill-color="#ffffff"/></style:style>',
+    '<style:style style:name="chG" style:family="chart"><style:graphic-properties svg:stroke-color="#dddddd"/></style:style>',
+]
+DASHES = [chart_stroke_dash("dashL", 0.3, 0.12)]
+
+
+def chart_body(cls, title, x_title, y_title, series_xml, plot_style, width, height, categories=None):
+    cats = f'<chart:categories table:cell-range-address="{categories}"/>' if categories else ""
+    return (f'<chart:chart svg:width="{width}cm" svg:height="{height}cm" chart:class="chart:{cls}" chart:style-name="chA">'
+            f'<chart:title chart:style-name="chT"><text:p>{title}</text:p></chart:title>'
+            f'<chart:legend chart:legend-position="bottom" style:legend-expansion="wide" chart:style-name="chL"/>'
+            f'<chart:plot-area chart:style-name="{plot_style}" chart:data-source-has-labels="none">'
+            f'<chart:axis chart:dimension="x" chart:name="primary-x" chart:style-name="chAx">{cats}'
+            f'<chart:title chart:style-name="chAt"><text:p>{x_title}</text:p></chart:title></chart:axis>'
+            f'<chart:axis chart:dimension="y" chart:name="primary-y" chart:style-name="chAy">'
+            f'<chart:title chart:style-name="chAt"><text:p>{y_title}</text:p></chart:title>'
+            f'<chart:grid chart:class="major" chart:style-name="chG"/></chart:axis>'
+            + series_xml + '<chart:wall chart:style-name="chW"/></chart:plot-area></chart:chart>')
+
+
+def heater_chart(system):
+    """Bars per heater: TTD and DCA from the test beside their design values (automatic
+    y axis: the values change sign, so Calc's scale fits them)."""
+    sh = "Heaters"
+    cats = f"{sh}.C{R_NAME}:{sh}.F{R_NAME}"
+    dt = UNIT["dT"][1 if system == "US" else 0]
+    # (row, colour); each series is named by its row's label in column A
+    series = [(R_RES["ttd"], "#1f4e9c"), (R_TTD_D, "#9dbce8"), (R_RES["dca"], "#b35806"), (R_DCA_D, "#f7c58f")]
+    styles = CHART_COMMON + [chart_axis_style("chAx"), chart_axis_style("chAy"),
+                             '<style:style style:name="chP" style:family="chart"><style:chart-properties '
+                             'chart:overlap="0" chart:gap-width="80"/></style:style>']
+    xml, ranges = "", [cats]
+    for k, (r, colour) in enumerate(series):
+        styles.append(f'<style:style style:name="b{k}" style:family="chart"><style:graphic-properties '
+                      f'draw:stroke="none" draw:fill-color="{colour}"/></style:style>')
+        ranges.append(f"{sh}.C{r}:{sh}.F{r}")
+        xml += (f'<chart:series chart:style-name="b{k}" chart:class="chart:bar" '
+                f'chart:values-cell-range-address="{sh}.C{r}:{sh}.F{r}" chart:label-cell-address="{sh}.$A${r}"/>')
+    body = chart_body("bar", "Feedwater heaters: TTD and DCA, test against design", "heater",
+                      f"temperature difference, {dt}", xml, "chP", 16, 9, cats)
+    return chart_object(body, styles, DASHES), ranges
+
+
+def heat_rate_chart(system):
+    """Heat rate against gross output: the cycle heat rate of each run, its design value,
+    and the net unit heat rate (automatic axes: Calc fits them to the values)."""
+    sh = "'Heat rate'"
+    hr = UNIT["hr"][1 if system == "US" else 0]
+    load = f"{sh}.C19:{sh}.E19"
+    # (row, colour, symbol, dash); each series is named by its row's label in column A
+    series = [(RR["hr"], "#c00000", "circle", None), (22, "#c00000", "square", "dashL"),
+              (RR["hr_net"], "#0050c0", "diamond", None)]
+    styles = CHART_COMMON + [chart_axis_style("chAx"), chart_axis_style("chAy"),
+                             '<style:style style:name="chP" style:family="chart"><style:chart-properties chart:lines="true" '
+                             'chart:interpolation="none" chart:treat-empty-cells="leave-gap"/></style:style>']
+    xml, ranges = "", [load]
+    for k, (r, colour, sym, dash) in enumerate(series):
+        styles.append(chart_series_style(f"s{k}", colour, "0.04cm", dash, sym, "0.25cm"))
+        ranges.append(f"{sh}.C{r}:{sh}.E{r}")
+        xml += (f'<chart:series chart:style-name="s{k}" chart:class="chart:scatter" '
+                f'chart:values-cell-range-address="{sh}.C{r}:{sh}.E{r}" chart:label-cell-address="{sh}.$A${r}">'
+                f'<chart:domain table:cell-range-address="{load}"/></chart:series>')
+    body = chart_body("scatter", "Heat rate against load", "generator output (gross), MW", f"heat rate, {hr}",
+                      xml, "chP", 16, 9)
+    return chart_object(body, styles, DASHES), ranges
 
 
 # ---------------------------------------------------------------- Heaters
@@ -180,71 +328,90 @@ HEATER_ROWS = [  # (row, label, quantity)
     (19, "Design DCA", "dT"),
 ]
 R_NAME, R_CASC_FROM, R_PSH, R_TEXT, R_TIN, R_TOUT, R_PFW, R_TDR, R_MFW, R_MCASC, R_TTD_D, R_DCA_D = range(8, 20)
+# "Readings complete" rows (TRUE/FALSE per heater).
+R_CASC, R_OK_PT, R_OK_FLOW = 20, 21, 22
+# Result rows.
+R_RES = {"ttd": 26, "ttd_d": 27, "dca": 28, "dca_d": 29, "rise": 30, "h_ext": 31, "h_in": 32, "h_out": 33,
+         "h_dr": 34, "h_casc": 35, "m_ext": 36, "m_out": 37}
+
+
+def heater_checks(c):
+    def r(n):
+        return ref(c, n)
+    return [
+        (R_CASC, "Drains cascade in (row 9 names a heater)", f"LEN(TRIM({r(R_CASC_FROM)}))>0"),
+        (R_OK_PT, "Readings complete: pressures and temperatures (rows 10-15)",
+         f"COUNT([.{c}{R_PSH}:.{c}{R_TDR}])={R_TDR - R_PSH + 1}"),
+        (R_OK_FLOW, "Readings complete: flows (row 16; with cascading drains row 17 and that heater's drain)",
+         f"AND({r(R_OK_PT)};ISNUMBER({r(R_MFW)});OR(NOT({r(R_CASC)});COUNT({r(R_MCASC)};{r(R_RES['h_casc'])})=2))"),
+    ]
 
 
 def heater_results(c):
     """(row, label, quantity, style, formula) of the results of the heater in column c."""
     def r(n):
         return ref(c, n)
-    no_casc = f"LEN(TRIM({r(R_CASC_FROM)}))=0"
+    ok, flows, casc = f"[.{c}${R_OK_PT}]", f"[.{c}${R_OK_FLOW}]", f"[.{c}${R_CASC}]"
     names = f"[.$C${R_NAME}:.$F${R_NAME}]"
-    h_drains = "[.$C$31:.$F$31]"
-    ext_ok = (f"AND(COUNT([.{c}{R_PSH}:.{c}{R_MFW}])={R_MFW - R_PSH + 1};"
-              f"OR({no_casc};AND(ISNUMBER({r(R_MCASC)});ISNUMBER({r(32)}))))")
+    h_drains = f"[.$C${R_RES['h_dr']}:.$F${R_RES['h_dr']}]"
+    rr = {k: r(v) for k, v in R_RES.items()}
+    ext = [r(R_MFW), rr["h_in"], rr["h_out"], rr["h_ext"], rr["h_dr"]]
     return [
-        (23, "TTD = Tsat(shell p) - feedwater outlet T", "dT", "result_2",
-         when(count_is(c, [R_PSH, R_TOUT]), call("FWHTTD", r(R_PSH), r(R_TOUT)))),
-        (24, "TTD test - design", "dT", "result_2",
-         when(f"AND(ISNUMBER({r(23)});ISNUMBER({r(R_TTD_D)}))", f"{r(23)}-{r(R_TTD_D)}")),
-        (25, "DCA = drain outlet T - feedwater inlet T", "dT", "result_2",
-         when(count_is(c, [R_TDR, R_TIN]), call("FWHDCA", r(R_TDR), r(R_TIN)))),
-        (26, "DCA test - design", "dT", "result_2",
-         when(f"AND(ISNUMBER({r(25)});ISNUMBER({r(R_DCA_D)}))", f"{r(25)}-{r(R_DCA_D)}")),
-        (27, "Feedwater temperature rise", "dT", "result_2",
-         when(count_is(c, [R_TIN, R_TOUT]), call("FWHRISE", r(R_TIN), r(R_TOUT)))),
-        (28, "Extraction steam enthalpy h(shell p, extraction T)", "h", "result_2",
-         when(count_is(c, [R_PSH, R_TEXT]), call("HPT", r(R_PSH), r(R_TEXT)))),
-        (29, "Feedwater inlet enthalpy h(feedwater p, inlet T)", "h", "result_2",
-         when(count_is(c, [R_PFW, R_TIN]), call("HPT", r(R_PFW), r(R_TIN)))),
-        (30, "Feedwater outlet enthalpy h(feedwater p, outlet T)", "h", "result_2",
-         when(count_is(c, [R_PFW, R_TOUT]), call("HPT", r(R_PFW), r(R_TOUT)))),
-        (31, "Drain enthalpy h(shell p, drain T)", "h", "result_2",
-         when(count_is(c, [R_PSH, R_TDR]), call("HPT", r(R_PSH), r(R_TDR)))),
-        (32, "Cascading drain enthalpy (drain of the heater named in row 9)", "h", "result_2",
-         f'IF({no_casc};"";INDEX({h_drains};1;MATCH(TRIM({r(R_CASC_FROM)});{names};0)))'),
-        (33, "Extraction steam flow (heater energy balance)", "m", "result_2",
-         when(ext_ok, call("FWHEXTRACTION", r(R_MFW), r(29), r(30), r(28), r(31),
-                           f"IF({no_casc};0;{r(R_MCASC)})", f"IF({no_casc};{r(31)};{r(32)})"))),
-        (34, "Drain flow out (extraction + cascade in), to the heater below", "m", "result_2",
-         when(f"ISNUMBER({r(33)})", f"{r(33)}+IF({no_casc};0;{r(R_MCASC)})")),
+        (26, "TTD = Tsat(shell p) - feedwater outlet T", "dT", "result_2",
+         when(ok, call("FWHTTD", r(R_PSH), r(R_TOUT)))),
+        (27, "TTD test - design", "dT", "result_2", when(f"COUNT({rr['ttd']};{r(R_TTD_D)})=2", f"{rr['ttd']}-{r(R_TTD_D)}")),
+        (28, "DCA = drain outlet T - feedwater inlet T", "dT", "result_2",
+         when(ok, call("FWHDCA", r(R_TDR), r(R_TIN)))),
+        (29, "DCA test - design", "dT", "result_2", when(f"COUNT({rr['dca']};{r(R_DCA_D)})=2", f"{rr['dca']}-{r(R_DCA_D)}")),
+        (30, "Feedwater temperature rise", "dT", "result_2", when(ok, call("FWHRISE", r(R_TIN), r(R_TOUT)))),
+        (31, "Extraction steam enthalpy h(shell p, extraction T)", "h", "result_2",
+         when(ok, call("HPT", r(R_PSH), r(R_TEXT)))),
+        (32, "Feedwater inlet enthalpy h(feedwater p, inlet T)", "h", "result_2",
+         when(ok, call("HPT", r(R_PFW), r(R_TIN)))),
+        (33, "Feedwater outlet enthalpy h(feedwater p, outlet T)", "h", "result_2",
+         when(ok, call("HPT", r(R_PFW), r(R_TOUT)))),
+        (34, "Drain enthalpy h(shell p, drain T)", "h", "result_2", when(ok, call("HPT", r(R_PSH), r(R_TDR)))),
+        (35, "Cascading drain enthalpy (drain of the heater named in row 9)", "h", "result_2",
+         when(casc, f"INDEX({h_drains};1;MATCH(TRIM({r(R_CASC_FROM)});{names};0))")),
+        (36, "Extraction steam flow (heater energy balance)", "m", "result_2",
+         when(flows, f"IF({casc};{call('FWHEXTRACTION', *ext, r(R_MCASC), rr['h_casc'])};"
+                     f"{call('FWHEXTRACTION', *ext, '', '')})")),
+        (37, "Drain flow out (extraction + cascade in), to the heater below", "m", "result_2",
+         when(flows, f"{rr['m_ext']}+IF({casc};{r(R_MCASC)};0)")),
     ]
 
 
-def heaters_sheet(demo):
+def heaters_sheet(demo, system):
     s = Sheet(2 + len(HEATER_COLS))
-    s.header("Harrow Fen Power Station, Unit 2 (a fictional plant): feedwater heater, pump and heat rate test" if demo
+    us = system == "US"
+    s.header("Harrow Fen Power Station, Unit 2 (a fictional plant): feedwater heater, pump and heat rate test"
+             + (", US units" if us else "") if demo
              else "Plant performance test: closed feedwater heaters, feed and condensate pumps, heat rate",
              "Routine performance test at 660 MW, invented readings for the Isentra demo. Heaters are in columns;"
-             " drains cascade from HP7 to HP6 and from LP4 to LP3." if demo
+             " drains cascade from HP7 to HP6 and from LP4 to LP3."
+             + (" The readings are those of the SI demo as US instruments show them." if us else "") if demo
              else "Enter the readings (absolute pressures) in the yellow cells; the grey cells are calculated by the"
              " Isentra add-in (IAPWS-IF97). Heaters are in columns; name the heater whose drains cascade in.",
-             [c_text("Units for the whole workbook", "label"), c_text("SI", "input"),
-              c_span("SI or US, for all three sheets. SI: MPa (absolute), °C, K, kg/s, kJ/kg.  "
-                     "US: psia, °F, Δ°F, lbm/h, Btu/lbm. Powers in kW or MW either way.", "note", len(HEATER_COLS))])
+             units_cell_row(system), units_note(system))
     s.add([c_text("Readings and design values", "subtitle")], expect=7)
-    s.readings(HEATER_ROWS, len(HEATER_COLS), HEATERS if demo else None,
-               [f"Heater {k + 1}" for k in range(len(HEATER_COLS))])
+    values = (us_columns(HEATERS, HEATER_ROWS) if us else HEATERS) if demo else None
+    s.readings(HEATER_ROWS, len(HEATER_COLS), values, [f"Heater {k + 1}" for k in range(len(HEATER_COLS))])
+    s.checks(HEATER_COLS, heater_checks)
     s.add([c_empty()])
-    s.add([c_text("Results", "subtitle")], expect=21)
-    s.results("Heater", R_NAME, HEATER_COLS, heater_results, expect=22)
+    s.add([c_text("Results", "subtitle")], expect=24)
+    s.results("Heater", R_NAME, HEATER_COLS, heater_results, expect=25)
     s.add([c_empty()])
     s.note("TTD and DCA as defined in ASME PTC 12.1; a negative TTD is normal for a heater with a desuperheating"
            " zone. Extraction flow from m_fw (h_fw,out - h_fw,in) = m_ext (h_ext - h_drain) + m_casc (h_casc -"
            " h_drain), heat lost to the surroundings neglected; drain enthalpies at shell pressure.")
     s.note("A heater whose drains cascade in from another one needs that heater's shell pressure and drain"
-           " temperature, in this sheet, under the name given in row 9.")
+           " temperature, in this sheet, under the name given in row 9. A result appears once the readings it"
+           " needs are complete (rows 20-22); a blank reading never reaches a calculation.")
     version_row(s)
-    return s.xml("Heaters")
+    s.add([c_empty()])
+    content, ranges = heater_chart(system)
+    s.chart("heater_chart", content, ranges, 16, 9, 18)
+    return s
 
 
 # ---------------------------------------------------------------- Pumps
@@ -269,54 +436,62 @@ PUMP_NOTE = ("Thermodynamic method: the efficiency rests on the small temperatur
              " of a kelvin for a condensate pump). Measure suction and discharge temperatures with calibrated"
              " sensors, in the same way, to 0.01 K or better: 0.05 K on a condensate pump shifts its efficiency by"
              " several percentage points.")
+P_OK_PT, P_OK_FLOW = 15, 16
+
+
+def pump_checks(c):
+    return [
+        (P_OK_PT, "Readings complete: pressures and temperatures (rows 9-12)", f"COUNT([.{c}9:.{c}12])=4"),
+        (P_OK_FLOW, "Readings complete: flow (row 13)", f"AND({ref(c, P_OK_PT)};ISNUMBER({ref(c, 13)}))"),
+    ]
 
 
 def pump_results(c):
     def r(n):
         return ref(c, n)
+    ok, flow = f"[.{c}${P_OK_PT}]", f"[.{c}${P_OK_FLOW}]"
+    # m (h_s - h_in) is in kW for SI (kg/s x kJ/kg) and in Btu/h for US (lbm/h x Btu/lbm).
+    mh_unit = f'IF({US};"Btu/h";"kW")'
     return [
-        (19, "Suction enthalpy h_in = h(p_in, T_in)", "h", "result_3",
-         when(count_is(c, [9, 10]), call("HPT", r(9), r(10)))),
-        (20, "Suction entropy s_in = s(p_in, T_in)", "s", "result_5",
-         when(count_is(c, [9, 10]), call("SPT", r(9), r(10)))),
-        (21, "Discharge enthalpy h_out = h(p_out, T_out)", "h", "result_3",
-         when(count_is(c, [11, 12]), call("HPT", r(11), r(12)))),
-        (22, "Isentropic discharge enthalpy h_s = h(p_out, s_in)", "h", "result_3",
-         when(f"AND(ISNUMBER({r(11)});ISNUMBER({r(20)}))", call("HPS", r(11), r(20)))),
-        (23, "Temperature rise T_out - T_in", "dT", "result_2",
-         when(count_is(c, [10, 12]), f"{r(12)}-{r(10)}")),
-        (24, "Isentropic work h_s - h_in", "h", "result_3",
-         when(f"COUNT({r(19)};{r(22)})=2", f"{r(22)}-{r(19)}")),
-        (25, "Pump work per unit mass h_out - h_in", "h", "result_3",
-         when(f"COUNT({r(19)};{r(21)})=2", f"{r(21)}-{r(19)}")),
-        (26, "Efficiency (h_s - h_in)/(h_out - h_in)", "%", "result_pct",
-         when(f"COUNT({r(24)};{r(25)})=2", f"{r(24)}/{r(25)}")),
-        (27, "Efficiency test - design (percentage points)", "%", "result_dpct",
-         when(f"COUNT({r(26)};{r(14)})=2", f"{r(26)}-{r(14)}")),
-        (28, "Hydraulic power m (h_s - h_in)", "kW", "result_1",
-         when(f"COUNT({r(13)};{r(24)})=2", f"{r(13)}*{r(24)}/IF({US};{KW_US};1)")),
-        (29, "Power absorbed by the water m (h_out - h_in)", "kW", "result_1",
-         when(f"COUNT({r(13)};{r(25)})=2", f"{r(13)}*{r(25)}/IF({US};{KW_US};1)")),
+        (21, "Suction enthalpy h_in = h(p_in, T_in)", "h", "result_3", when(ok, call("HPT", r(9), r(10)))),
+        (22, "Suction entropy s_in = s(p_in, T_in)", "s", "result_5", when(ok, call("SPT", r(9), r(10)))),
+        (23, "Discharge enthalpy h_out = h(p_out, T_out)", "h", "result_3", when(ok, call("HPT", r(11), r(12)))),
+        (24, "Isentropic discharge enthalpy h_s = h(p_out, s_in)", "h", "result_3",
+         when(ok, call("HPS", r(11), r(22)))),
+        (25, "Temperature rise T_out - T_in", "dT", "result_2", when(ok, f"{r(12)}-{r(10)}")),
+        (26, "Isentropic work h_s - h_in", "h", "result_3", when(ok, f"{r(24)}-{r(21)}")),
+        (27, "Pump work per unit mass h_out - h_in", "h", "result_3", when(ok, f"{r(23)}-{r(21)}")),
+        (28, "Efficiency (h_s - h_in)/(h_out - h_in)", "%", "result_pct", when(ok, f"{r(26)}/{r(27)}")),
+        (29, "Efficiency test - design (percentage points)", "%", "result_dpct",
+         when(f"COUNT({r(28)};{r(14)})=2", f"{r(28)}-{r(14)}")),
+        (30, "Hydraulic power m (h_s - h_in)", "kW", "result_1",
+         when(flow, f'{ADDIN}CONVERT({r(13)}*{r(26)};{mh_unit};"kW")')),
+        (31, "Power absorbed by the water m (h_out - h_in)", "kW", "result_1",
+         when(flow, f'{ADDIN}CONVERT({r(13)}*{r(27)};{mh_unit};"kW")')),
     ]
 
 
-def pumps_sheet(demo):
+def pumps_sheet(demo, system):
     s = Sheet(2 + len(PUMP_COLS))
-    s.header("Harrow Fen Power Station, Unit 2: feed and condensate pump efficiency" if demo
-             else "Pump efficiency by the thermodynamic method",
+    us = system == "US"
+    s.header("Harrow Fen Power Station, Unit 2: feed and condensate pump efficiency" + (", US units" if us else "")
+             if demo else "Pump efficiency by the thermodynamic method",
              "Efficiency from suction and discharge pressure and temperature: (h_s - h_in)/(h_out - h_in),"
              " h_s = h(p_out, s_in), IAPWS-IF97.", linked_units_cell())
     s.add([c_text("Readings", "subtitle")], expect=7)
-    s.readings(PUMP_ROWS, len(PUMP_COLS), PUMPS if demo else None, ["Feed pump", "Cond. pump"])
-    s.note(PUMP_NOTE, "caution_note", expect=15)
+    values = (us_columns(PUMPS, PUMP_ROWS, fine=True) if us else PUMPS) if demo else None
+    s.readings(PUMP_ROWS, len(PUMP_COLS), values, ["Feed pump", "Cond. pump"])
+    s.checks(PUMP_COLS, pump_checks)
+    s.note(PUMP_NOTE, "caution_note", expect=17)
     s.add([c_empty()])
-    s.add([c_text("Results (thermodynamic method)", "subtitle")], expect=17)
-    s.results("Pump", 8, PUMP_COLS, pump_results, expect=18)
+    s.add([c_text("Results (thermodynamic method)", "subtitle")], expect=19)
+    s.results("Pump", 8, PUMP_COLS, pump_results, expect=20)
     s.add([c_empty()])
     s.note("The power absorbed by the water excludes bearing, seal and coupling losses: the shaft power is"
-           " larger. A leak-off or balance flow returned to suction belongs in the flow reading.")
+           " larger. A leak-off or balance flow returned to suction belongs in the flow reading. Powers are"
+           " converted to kW by STEAM.CONVERT from kg/s x kJ/kg (SI) or lbm/h x Btu/lbm = Btu/h (US).")
     version_row(s)
-    return s.xml("Pumps")
+    return s
 
 
 # ---------------------------------------------------------------- Heat rate
@@ -347,57 +522,89 @@ RUN_ROWS = [
     (21, "Boiler efficiency", "%"),
     (22, "Design turbine cycle heat rate", "hr"),
 ]
+HR_KWH, HR_UNITS = 23, 24          # heat rate of 1 kWh per kWh; units text of the heat rate calls
+H_RH, H_OK_MAIN, H_OK_RH, H_READY, H_OK_NET = 25, 26, 27, 28, 29
+RR = {"h_ms": 33, "h_fw": 34, "h_crh": 35, "h_hrh": 36, "hr": 37, "hr_d": 38, "q": 39, "eta": 40, "net": 41,
+      "hr_net": 42, "eta_net": 43}
+
+
+def run_checks(c):
+    def r(n):
+        return ref(c, n)
+    return [
+        (H_RH, "Reheat (row 14 above 0)", f"AND(ISNUMBER({r(14)});{r(14)}>0)"),
+        (H_OK_MAIN, "Readings complete: main steam, feedwater, reheat flow, output (rows 9-14, 19)",
+         f"COUNT([.{c}9:.{c}14];{r(19)})=7"),
+        (H_OK_RH, "Readings complete: reheat pressures and temperatures (rows 15-18)", f"COUNT([.{c}15:.{c}18])=4"),
+        (H_READY, "Ready for the heat rate (row 26, and row 27 with reheat)",
+         f"AND({r(H_OK_MAIN)};OR(NOT({r(H_RH)});{r(H_OK_RH)}))"),
+        (H_OK_NET, "Readings complete: auxiliary power and boiler efficiency (rows 20-21)", f"COUNT([.{c}20:.{c}21])=2"),
+    ]
 
 
 def run_results(c):
     def r(n):
         return ref(c, n)
-    no_rh = f"AND(ISNUMBER({r(14)});{r(14)}=0)"
-    base = f"AND(COUNT({r(9)};{r(19)};{r(27)};{r(28)})=4;OR({no_rh};COUNT({r(14)};{r(29)};{r(30)})=3))"
-    # STEAM.HEATRATE.CYCLE/NET: m_ms, h_fw, h_ms, P_gen[, P_aux, eta_boiler], m_rh, h_crh, h_hrh.
-    main = [r(9), r(28), r(27), f"1000*{r(19)}"]
-    rh = [r(14), f"IF(ISNUMBER({r(29)});{r(29)};0)", f"IF(ISNUMBER({r(30)});{r(30)};0)"]
+    main_ok, rh_ok, ready, net_ok, rh = (f"[.{c}${n}]" for n in (H_OK_MAIN, H_OK_RH, H_READY, H_OK_NET, H_RH))
+    u_mw = f"[.$C${HR_UNITS}]"  # the units text with powers in MW
+    kwh = f"[.$C${HR_KWH}]"
+    x = {k: r(v) for k, v in RR.items()}
+    # STEAM.HEATRATE.CYCLE/NET: m_ms, h_fw, h_ms, P_gen[, P_aux, eta_boiler][, m_rh, h_crh, h_hrh].
+    main = [r(9), x["h_fw"], x["h_ms"], r(19)]
+    reheat = [r(14), x["h_crh"], x["h_hrh"]]
+
+    def heat_rate(method, *extra):
+        with_rh = call(method, *main, *extra, *reheat, units=u_mw)
+        without = call(method, *main, *extra, "", "", "", units=u_mw)
+        return f"IF({rh};{with_rh};{without})"
     return [
-        (27, "Main steam enthalpy", "h", "result_2", when(count_is(c, [10, 11]), call("HPT", r(10), r(11)))),
-        (28, "Final feedwater enthalpy", "h", "result_2", when(count_is(c, [12, 13]), call("HPT", r(12), r(13)))),
-        (29, "Cold reheat enthalpy", "h", "result_2", when(count_is(c, [15, 16]), call("HPT", r(15), r(16)))),
-        (30, "Hot reheat enthalpy", "h", "result_2", when(count_is(c, [17, 18]), call("HPT", r(17), r(18)))),
-        (31, "Turbine cycle heat rate", "hr", "result_1", when(base, call("HEATRATECYCLE", *main, *rh))),
-        (32, "Cycle heat rate test - design", "%", "result_dpct",
-         when(f"COUNT({r(31)};{r(22)})=2", f"{r(31)}/{r(22)}-1")),
-        (33, "Heat added to the cycle (heat rate x gross output / 1 kWh)", "MW", "result_2",
-         when(f"ISNUMBER({r(31)})", f"{r(31)}*{r(19)}/{KWH}")),
-        (34, "Turbine cycle efficiency (1 kWh / cycle heat rate)", "%", "result_pct",
-         when(f"ISNUMBER({r(31)})", f"{KWH}/{r(31)}")),
-        (35, "Net output (gross - auxiliary)", "MW", "result_2",
-         when(f"COUNT({r(19)};{r(20)})=2", f"{r(19)}-{r(20)}")),
-        (36, "Net unit heat rate (fuel heat per net kWh)", "hr", "result_1",
-         when(f"AND({base};COUNT({r(20)};{r(21)})=2)",
-              call("HEATRATENET", *main, f"1000*{r(20)}", r(21), *rh))),
-        (37, "Net unit efficiency (1 kWh / net unit heat rate)", "%", "result_pct",
-         when(f"ISNUMBER({r(36)})", f"{KWH}/{r(36)}")),
+        (33, "Main steam enthalpy", "h", "result_2", when(main_ok, call("HPT", r(10), r(11)))),
+        (34, "Final feedwater enthalpy", "h", "result_2", when(main_ok, call("HPT", r(12), r(13)))),
+        (35, "Cold reheat enthalpy", "h", "result_2", when(rh_ok, call("HPT", r(15), r(16)))),
+        (36, "Hot reheat enthalpy", "h", "result_2", when(rh_ok, call("HPT", r(17), r(18)))),
+        (37, "Turbine cycle heat rate", "hr", "result_1", when(ready, heat_rate("HEATRATECYCLE"))),
+        (38, "Cycle heat rate test - design", "%", "result_dpct",
+         when(f"COUNT({x['hr']};{r(22)})=2", f"{x['hr']}/{r(22)}-1")),
+        (39, "Heat added to the cycle (heat rate x gross output / 1 kWh)", "MW", "result_2",
+         when(ready, f"{x['hr']}*{r(19)}/{kwh}")),
+        (40, "Turbine cycle efficiency (1 kWh / cycle heat rate)", "%", "result_pct", when(ready, f"{kwh}/{x['hr']}")),
+        (41, "Net output (gross - auxiliary)", "MW", "result_2", when(f"COUNT({r(19)};{r(20)})=2", f"{r(19)}-{r(20)}")),
+        (42, "Net unit heat rate (fuel heat per net kWh)", "hr", "result_1",
+         when(f"AND({ready};{net_ok})", heat_rate("HEATRATENET", r(20), r(21)))),
+        (43, "Net unit efficiency (1 kWh / net unit heat rate)", "%", "result_pct",
+         when(f"AND({ready};{net_ok})", f"{kwh}/{x['hr_net']}")),
     ]
 
 
-def heat_rate_sheet(demo):
+def heat_rate_sheet(demo, system):
     s = Sheet(2 + len(RUN_COLS))
-    s.header("Harrow Fen Power Station, Unit 2: heat rate test" if demo else "Heat rate test: turbine cycle and net unit",
+    us = system == "US"
+    s.header("Harrow Fen Power Station, Unit 2: heat rate test" + (", US units" if us else "") if demo
+             else "Heat rate test: turbine cycle and net unit",
              "Heat added to the cycle m_ms (h_ms - h_fw) + m_rh (h_hrh - h_crh); cycle heat rate = heat added / gross"
              " output; net unit heat rate = heat added / boiler efficiency / (gross - auxiliary power).",
              linked_units_cell())
     s.add([c_text("Readings (one column per test run)", "subtitle")], expect=7)
-    s.readings(RUN_ROWS, len(RUN_COLS), RUNS if demo else None, [f"Run {k + 1}" for k in range(len(RUN_COLS))])
-    s.add([c_text("1 kWh in the heat rate's unit", "label"), unit_cell("hr"), c_formula(f"IF({US};{KWH_US};3600)", "result_2")],
-          expect=23)
+    values = (us_columns(RUNS, RUN_ROWS) if us else RUNS) if demo else None
+    s.readings(RUN_ROWS, len(RUN_COLS), values, [f"Run {k + 1}" for k in range(len(RUN_COLS))])
+    s.add([c_text("1 kWh per kWh: the heat rate of a cycle without losses (STEAM.CONVERT of 3600 kJ/kWh)", "label"),
+           unit_cell("hr"), c_formula(f'{ADDIN}CONVERT(3600;"kJ/kWh";[.$B${HR_KWH}])', "result_2")], expect=HR_KWH)
+    s.add([c_text("Units text of the heat rate calls: the units cell with powers in MW", "label"), c_blank("unit"),
+           c_formula(f'{UNITS}&" P=MW"', "result", True)], expect=HR_UNITS)
+    s.checks(RUN_COLS, run_checks)
     s.add([c_empty()])
-    s.add([c_text("Results", "subtitle")], expect=25)
-    s.results("Test run", 8, RUN_COLS, run_results, expect=26)
+    s.add([c_text("Results", "subtitle")], expect=31)
+    s.results("Test run", 8, RUN_COLS, run_results, expect=32)
     s.add([c_empty()])
-    s.note("1 kWh is 3600 kJ or 3412.14 Btu; an efficiency is that energy divided by the heat rate."
-           " Test - design is relative: (test / design - 1). Generator output and auxiliary power are in MW; the"
-           " add-in takes kW (x 1000 in the formulas).")
+    s.note("An efficiency is 1 kWh divided by the heat rate (3600 kJ or 3412.14 Btu per kWh)."
+           " Test - design is relative: (test / design - 1). Generator output and auxiliary power are in MW:"
+           " the calls get the units text of row 24, which says so (\"P=MW\"). Without reheat (row 14 = 0) the"
+           " reheat readings may stay blank and the calls leave out the reheat arguments.")
     version_row(s)
-    return s.xml("Heat rate")
+    s.add([c_empty()])
+    content, ranges = heat_rate_chart(system)
+    s.chart("heat_rate_chart", content, ranges, 16, 9, 18)
+    return s
 
 
 # ---------------------------------------------------------------- document
@@ -412,7 +619,8 @@ def result_style(name, data_style):
             '<style:table-cell-properties fo:background-color="#eeeeee"/></style:style>')
 
 
-def document(demo):
+def document(demo, system):
+    """content.xml and the chart objects [(folder, content, styles)] of the whole workbook."""
     extra = [table_style("ta_sheet"), column_style("coA", "11.8cm"), column_style("coB", "2.1cm"),
              column_style("coC", "3.2cm")]
     extra += ['<style:style style:name="input_name" style:family="table-cell"><style:table-cell-properties'
@@ -425,16 +633,36 @@ def document(demo):
               ' style:vertical-align="top"/></style:style>',
               '<style:style style:name="caution_note" style:family="table-cell"><style:table-cell-properties'
               ' fo:wrap-option="wrap" style:vertical-align="top"/><style:text-properties fo:font-weight="bold"'
-              ' fo:color="#b00000"/></style:style>']
+              ' fo:color="#b00000"/></style:style>',
+              '<style:style style:name="check" style:family="table-cell" style:data-style-name="Nb"><style:table-cell-properties'
+              ' fo:background-color="#eeeeee"/><style:paragraph-properties fo:text-align="end"/>'
+              '<style:text-properties fo:font-size="8pt"/></style:style>',
+              ]
     for d in (1, 2, 3, 5):
         extra += [number_style(f"Nr{d}", d), result_style(f"result_{d}", f"Nr{d}")]
     auto = COMMON_STYLES + "  " + "\n  ".join(extra) + CELL_STYLES
-    return content_xml(auto, heaters_sheet(demo) + pumps_sheet(demo) + heat_rate_sheet(demo))
+    sheets = [("Heaters", heaters_sheet(demo, system)), ("Pumps", pumps_sheet(demo, system)),
+              ("Heat rate", heat_rate_sheet(demo, system))]
+    xml, objects = "", []
+    for name, sheet in sheets:
+        sx = sheet.xml(name)
+        for frame, (content, styles), _ in sheet.charts:
+            folder = f"Object {len(objects) + 1}"
+            sx = sx.replace(f'xlink:href="./Object {frame}"', f'xlink:href="./{folder}"')
+            objects.append((folder, content, styles))
+        xml += sx
+    return content_xml(auto, xml), objects
 
 
-def write(path, mimetype, demo, title):
-    write_package(path, mimetype, [("content.xml", document(demo)), ("styles.xml", styles_xml()),
-                                   ("meta.xml", meta_xml(title, "gen_plant_workbook.py"))])
+def write(path, mimetype, demo, system, title):
+    content, objects = document(demo, system)
+    parts, manifest = [], []
+    for folder, c, s in objects:
+        p, m = chart_parts(folder, c, s)
+        parts += p
+        manifest += m
+    write_package(path, mimetype, [("content.xml", content), ("styles.xml", styles_xml()),
+                                   ("meta.xml", meta_xml(title, "gen_plant_workbook.py"))] + parts, manifest)
 
 
 def main():
@@ -442,10 +670,14 @@ def main():
         sys.exit("usage: gen_plant_workbook.py OUTDIR")
     out = sys.argv[1]
     os.makedirs(out, exist_ok=True)
-    write(os.path.join(out, "harrow-fen-unit2-plant-performance.ods"), MIME_ODS, True,
+    write(os.path.join(out, "harrow-fen-unit2-plant-performance.ods"), MIME_ODS, True, "SI",
           "Harrow Fen Unit 2 feedwater heater, pump and heat rate test (fictional demo)")
-    write(os.path.join(out, "isentra-plant-performance.ots"), MIME_OTS, False,
+    write(os.path.join(out, "harrow-fen-unit2-plant-performance-us.ods"), MIME_ODS, True, "US",
+          "Harrow Fen Unit 2 feedwater heater, pump and heat rate test, US units (fictional demo)")
+    write(os.path.join(out, "isentra-plant-performance.ots"), MIME_OTS, False, "SI",
           "Plant performance test: heaters, pumps, heat rate (Isentra)")
+    write(os.path.join(out, "isentra-plant-performance-us.ots"), MIME_OTS, False, "US",
+          "Plant performance test, US units: heaters, pumps, heat rate (Isentra)")
 
 
 if __name__ == "__main__":

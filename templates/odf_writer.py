@@ -112,8 +112,9 @@ def grid_rows(grid, nrows, ncols):
 
 # ---------------------------------------------------------------- styles
 # Number and cell styles common to the workbooks (content.xml automatic styles).
-# Yellow = input, grey = calculated; Np = percent, Npd-neg = signed percent.
+# Yellow = input, grey = calculated; Np = percent, Npd-neg = signed percent, Nb = TRUE/FALSE.
 COMMON_STYLES = """
+  <number:boolean-style style:name="Nb"><number:boolean/></number:boolean-style>
   <number:number-style style:name="Nf"><number:number number:decimal-places="4" number:min-decimal-places="0" number:min-integer-digits="1"/></number:number-style>
   <number:percentage-style style:name="Np"><number:number number:decimal-places="2" number:min-decimal-places="2" number:min-integer-digits="1"/><number:text>%</number:text></number:percentage-style>
   <number:percentage-style style:name="Npd"><number:text>+</number:text><number:number number:decimal-places="2" number:min-decimal-places="2" number:min-integer-digits="1"/><number:text>%</number:text></number:percentage-style>
@@ -206,3 +207,70 @@ def write_package(path, mimetype, parts, manifest_extra=()):
         for name, data in parts:
             add(name, data)
     os.replace(tmp, path)
+
+
+# ---------------------------------------------------------------- charts
+# An embedded chart is an object folder ("Object 1/", "Object 2/", ...) with
+# its own content.xml and styles.xml, listed in the manifest, and a draw:frame
+# in a sheet cell that points at it. The helpers below write both; a
+# generator supplies the chart:chart body (plot area, axes, series) and the
+# automatic styles it uses.
+CHART_MIME = "application/vnd.oasis.opendocument.chart"
+
+
+def chart_axis_style(name, minimum=None, maximum=None, interval=None, font="8pt"):
+    """An axis style: fixed minimum/maximum/major interval where given, automatic otherwise."""
+    fixed = ""
+    if minimum is not None:
+        fixed += f' chart:minimum="{minimum!r}"'
+    if maximum is not None:
+        fixed += f' chart:maximum="{maximum!r}"'
+    if interval is not None:
+        fixed += f' chart:interval-major="{interval!r}"'
+    return (f'<style:style style:name="{name}" style:family="chart"><style:chart-properties chart:display-label="true"'
+            f'{fixed}/><style:text-properties fo:font-size="{font}"/></style:style>')
+
+
+def chart_series_style(name, colour, width="0.05cm", dash=None, symbol=None, symbol_size="0.2cm", line=True):
+    """A series style: line colour/width, dash (the name of a draw:stroke-dash in the chart's
+    styles.xml) or solid, and a named symbol (circle, square, diamond, arrow-up, x, ...) or none."""
+    stroke = "none" if not line else ("dash" if dash else "solid")
+    dash_attr = f' draw:stroke-dash="{dash}"' if dash and line else ""
+    sym = (f'chart:symbol-type="named-symbol" chart:symbol-name="{symbol}" chart:symbol-width="{symbol_size}" '
+           f'chart:symbol-height="{symbol_size}"' if symbol else 'chart:symbol-type="none"')
+    return (f'<style:style style:name="{name}" style:family="chart"><style:chart-properties {sym}/>'
+            f'<style:graphic-properties draw:stroke="{stroke}"{dash_attr} svg:stroke-width="{width}" '
+            f'svg:stroke-color="{colour}" draw:fill-color="{colour}"/></style:style>')
+
+
+def chart_stroke_dash(name, dot_cm, gap_cm, dots=1):
+    """A dash pattern for chart_series_style(dash=name), placed in the chart's styles.xml."""
+    return (f'<draw:stroke-dash draw:name="{name}" draw:style="rect" draw:dots1="{dots}" '
+            f'draw:dots1-length="{dot_cm}cm" draw:distance="{gap_cm}cm"/>')
+
+
+def chart_object(body, automatic_styles, dashes=()):
+    """(content.xml, styles.xml) of an embedded chart: body is the chart:chart element."""
+    content = (f'<?xml version="1.0" encoding="UTF-8"?>\n<office:document-content {NS}>'
+               f'<office:automatic-styles>{"".join(automatic_styles)}</office:automatic-styles>'
+               f'<office:body><office:chart>{body}</office:chart></office:body></office:document-content>')
+    styles = (f'<?xml version="1.0" encoding="UTF-8"?>\n<office:document-styles {NS}>'
+              f'<office:styles>{"".join(dashes)}</office:styles></office:document-styles>')
+    return content, styles
+
+
+def chart_parts(folder, content, styles):
+    """The package parts and manifest entries of one chart object folder (e.g. "Object 2")."""
+    parts = [(f"{folder}/content.xml", content), (f"{folder}/styles.xml", styles)]
+    manifest = [(f"{folder}/", CHART_MIME, True), (f"{folder}/content.xml", "text/xml", False),
+                (f"{folder}/styles.xml", "text/xml", False)]
+    return parts, manifest
+
+
+def chart_frame_cell(name, folder, ranges, width_cm, height_cm):
+    """A cell holding the frame of an embedded chart. ranges: the cell ranges the chart
+    reads (e.g. ["Sheet.A1:Sheet.A9", ...]); Calc redraws the chart when they change."""
+    return (f'<table:table-cell><draw:frame draw:z-index="0" draw:name="{name}" svg:width="{width_cm}cm" '
+            f'svg:height="{height_cm}cm" svg:x="0cm" svg:y="0.1cm">'
+            f'<draw:object draw:notify-on-update-of-ranges={quoteattr(" ".join(ranges))} xlink:href="./{folder}" '
+            'xlink:type="simple" xlink:show="embed" xlink:actuate="onLoad"/></draw:frame></table:table-cell>')
