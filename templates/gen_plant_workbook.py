@@ -21,7 +21,7 @@ Sheets:
              method, (h_s - h_in)/(h_out - h_in) with h_s = h(p_out, s_in),
              specific work, hydraulic and absorbed power
   Heat rate  turbine cycle and net unit heat rate and efficiency per test run;
-             chart: heat rate against load, test and design
+             chart: turbine cycle heat rate against load, test and design
 
 This script is the reviewable source of these files (standard library only;
 the build runs it with /usr/bin/python3). Every result is a formula of the
@@ -277,14 +277,14 @@ def heater_chart(system):
 
 
 def heat_rate_chart(system):
-    """Heat rate against gross output: the cycle heat rate of each run, its design value,
-    and the net unit heat rate (automatic axes: Calc fits them to the values)."""
+    """Turbine cycle heat rate against gross output, test and design (automatic axes: Calc
+    fits them to the values; the net unit heat rate, some 20 % higher, would stretch the
+    heat rate axis down to 0, so it stays in the table)."""
     sh = "'Heat rate'"
     hr = UNIT["hr"][1 if system == "US" else 0]
     load = f"{sh}.C19:{sh}.E19"
     # (row, colour, symbol, dash); each series is named by its row's label in column A
-    series = [(RR["hr"], "#c00000", "circle", None), (22, "#c00000", "square", "dashL"),
-              (RR["hr_net"], "#0050c0", "diamond", None)]
+    series = [(RR["hr"], "#c00000", "circle", None), (22, "#0050c0", "square", "dashL")]
     styles = CHART_COMMON + [chart_axis_style("chAx"), chart_axis_style("chAy"),
                              '<style:style style:name="chP" style:family="chart"><style:chart-properties chart:lines="true" '
                              'chart:interpolation="none" chart:treat-empty-cells="leave-gap"/></style:style>']
@@ -295,7 +295,7 @@ def heat_rate_chart(system):
         xml += (f'<chart:series chart:style-name="s{k}" chart:class="chart:scatter" '
                 f'chart:values-cell-range-address="{sh}.C{r}:{sh}.E{r}" chart:label-cell-address="{sh}.$A${r}">'
                 f'<chart:domain table:cell-range-address="{load}"/></chart:series>')
-    body = chart_body("scatter", "Heat rate against load", "generator output (gross), MW", f"heat rate, {hr}",
+    body = chart_body("scatter", "Turbine cycle heat rate against load, test and design", "generator output (gross), MW", f"heat rate, {hr}",
                       xml, "chP", 16, 9)
     return chart_object(body, styles, DASHES), ranges
 
