@@ -292,6 +292,17 @@ TEST(TransportViscosity, DefaultIsIndustrialEverywhere) {
     }
 }
 
+TEST(TransportViscosity, EnhancementAgreesWithTheFullCorrelation) {
+    // At 25.16 MPa, 387 degC (outside R12-08 Eq. 13's box, inside Sec. 2.8 footnote 2's
+    // region) the enhancement adds 0.21 %; the full R12-08 correlation on IAPWS-95 at
+    // the same density gives the same: python3-iapws 1.5.2 (Debian),
+    // IAPWS95(rho=270.7195812320097, T=660.15).mu = 3.58342017898013e-05 Pa s.
+    const State st = state_pT(25.16, 660.15);
+    EXPECT_NEAR(st.rho, 270.7195812320097, 1e-9 * st.rho);  // python3-iapws 1.5.2 (Debian), IAPWS97
+    EXPECT_NEAR(viscosity_with_enhancement(st) / viscosity(st) - 1.0, 0.0021, 0.0001);
+    EXPECT_LT(rel(viscosity_with_enhancement(st), 3.58342017898013e-05), 5e-5);
+}
+
 TEST(TransportViscosity, EnhancementOnlyNearCritical) {
     // viscosity_with_enhancement: far from the critical point mu_2 = 1 exactly
     // (outside R12-08 Sec. 2.8 footnote 2's region).
