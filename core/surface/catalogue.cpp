@@ -303,6 +303,90 @@ void add_state_family(std::vector<Function>& out) {
     }
 }
 
+// Worked examples for docs/functions.md (Function::example), SI units, with
+// readings of the (fictional) Harrow Fen Unit 2 where there are some. The
+// property families get one state per input pair; the rest by name.
+void add_examples(std::vector<Function>& out) {
+    static const std::pair<const char*, const char*> by_name[] = {
+        {"STEAM.TSAT", "0.1"},
+        {"STEAM.PSAT", "100"},
+        {"STEAM.SIGMA.T", "100"},
+        {"STEAM.TURBINE.EXPANSION.PT", "16.62; 538.4; 4.08; 0.87"},
+        {"STEAM.TURBINE.HOUT.PT", "16.62; 538.4; 4.08; 0.87"},
+        {"STEAM.TURBINE.TOUT.PT", "16.62; 538.4; 4.08; 0.87"},
+        {"STEAM.TURBINE.XOUT.PT", "16.62; 538.4; 4.08; 0.87"},
+        {"STEAM.TURBINE.WORK.PT", "16.62; 538.4; 4.08; 0.87"},
+        {"STEAM.TURBINE.EXPANSION.PH", "0.95; 3050; 0.0065; 0.88"},
+        {"STEAM.TURBINE.HOUT.PH", "0.95; 3050; 0.0065; 0.88"},
+        {"STEAM.TURBINE.TOUT.PH", "0.95; 3050; 0.0065; 0.88"},
+        {"STEAM.TURBINE.XOUT.PH", "0.95; 3050; 0.0065; 0.88"},
+        {"STEAM.TURBINE.WORK.PH", "0.95; 3050; 0.0065; 0.88"},
+        {"STEAM.TURBINE.EFF.PT.PT", "16.62; 538.4; 4.08; 333.1"},
+        {"STEAM.TURBINE.EFF.PT.PH", "0.95; 300; 0.0065; 2400"},
+        {"STEAM.TURBINE.EFF.PH.PH", "0.95; 3050; 0.0065; 2400"},
+        {"STEAM.TURBINE.EFF.UNC.PT.PT", "16.62; 538.4; 4.08; 333.1; 0.0025; 1; 0.0025; 1"},
+        {"STEAM.TURBINE.EFF.BUDGET.PT.PT", "16.62; 538.4; 4.08; 333.1; 0.0025; 1; 0.0025; 1"},
+        {"STEAM.BAUMANN.WET", "0.9; 0.95; 0.88; 1"},
+        {"STEAM.BAUMANN.DRY", "0.85; 0.95; 0.88; 1"},
+        {"STEAM.PUMP.OUTLET.PT", "1.2; 180; 19; 0.82"},
+        {"STEAM.PUMP.HOUT.PT", "1.2; 180; 19; 0.82"},
+        {"STEAM.PUMP.TOUT.PT", "1.2; 180; 19; 0.82"},
+        {"STEAM.PUMP.WORK.PT", "1.2; 180; 19; 0.82"},
+        {"STEAM.PUMP.OUTLET.PH", "0.008; 173.8; 2.5; 0.8"},
+        {"STEAM.PUMP.HOUT.PH", "0.008; 173.8; 2.5; 0.8"},
+        {"STEAM.PUMP.TOUT.PH", "0.008; 173.8; 2.5; 0.8"},
+        {"STEAM.PUMP.WORK.PH", "0.008; 173.8; 2.5; 0.8"},
+        {"STEAM.VALVE.OUTLET.PT", "16.62; 538.4; 12"},
+        {"STEAM.VALVE.TOUT.PT", "16.62; 538.4; 12"},
+        {"STEAM.VALVE.XOUT.PT", "16.62; 538.4; 12"},
+        {"STEAM.VALVE.OUTLET.PH", "1; 2700; 0.1"},
+        {"STEAM.VALVE.TOUT.PH", "1; 2700; 0.1"},
+        {"STEAM.VALVE.XOUT.PH", "1; 2700; 0.1"},
+        {"STEAM.MIX.H", "100; 2800; 20; 700"},
+        {"STEAM.MIX.T", "100; 2800; 20; 700; 1"},
+        {"STEAM.MIX.OUTLET", "100; 2800; 20; 700; 1"},
+        {"STEAM.DESUPERHEATER.SPRAY", "50; 4; 450; 6; 150; 400"},
+        {"STEAM.FWH.TTD", "1.8; 204"},
+        {"STEAM.FWH.DCA", "180; 174"},
+        {"STEAM.FWH.RISE", "174; 204"},
+        {"STEAM.FWH.EXTRACTION", "180; 740; 873; 3030; 770"},
+        {"STEAM.HEATRATE.CYCLE", "180; 1100; 3400; 190000; 160; 3000; 3540"},
+        {"STEAM.HEATRATE.NET", "180; 1100; 3400; 190000; 9000; 0.88; 160; 3000; 3540"},
+        {"STEAM.CONVERT", "150; \"psig\"; \"MPa\""},
+        {"STEAM.EXPLAIN", "\"H.PT\"; 200; 300"},
+        {"STEAM.VERSION", ""},
+    };
+    // Input pairs: main steam (16.62 MPa, 538.4 degC), a superheated IP state,
+    // the condenser (6.5 kPa, wet). Wet states use x = 1 for the properties that
+    // a wet state does not have (cp, cv, w, kappa, transport).
+    static const std::pair<const char*, const char*> by_pair[] = {
+        {"PT", "16.62; 538.4"}, {"PH", "4.08; 3050"}, {"PS", "4.08; 6.5"},
+        {"HS", "3400; 6.5"},    {"PX", "0.0065; 0.9"}, {"TX", "37.6; 0.9"}};
+    const std::string wet_ok = "|T|P|H|S|U|V|RHO|STATE|";
+    for (Function& f : out) {
+        if (!f.example.empty()) continue;
+        for (const auto& e : by_name)
+            if (f.name == e.first) f.example = f.name + "(" + e.second + ")";
+        if (!f.example.empty()) continue;
+        const std::size_t d1 = f.name.find('.'), d2 = f.name.rfind('.');
+        if (d1 == d2 || f.name.find('.', d1 + 1) != d2) continue;  // STEAM.<A>.<B> only
+        const std::string prop = f.name.substr(d1 + 1, d2 - d1 - 1), in = f.name.substr(d2 + 1);
+        for (const auto& e : by_pair)
+            if (in == e.first) {
+                std::string a = e.second;
+                if ((in == "PX" || in == "TX") && wet_ok.find("|" + prop + "|") == std::string::npos)
+                    a.replace(a.size() - 3, 3, "1");
+                f.example = f.name + "(" + a + ")";
+            }
+        if (!f.example.empty()) continue;
+        // The saturation family, STEAM.<prop>{F,G,FG}.{P,T}: the condenser pressure or 100 degC.
+        const char last = prop.empty() ? ' ' : prop.back();
+        if (last != 'F' && last != 'G') continue;
+        if (in == "P") f.example = f.name + "(0.0065)";
+        if (in == "T") f.example = f.name + "(100)";
+    }
+}
+
 std::vector<Function> build() {
     std::vector<Function> out;
     {
@@ -390,6 +474,7 @@ std::vector<Function> build() {
         f.kind = ResultKind::Text;
         out.push_back(std::move(f));
     }
+    add_examples(out);
     return out;
 }
 

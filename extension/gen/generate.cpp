@@ -20,6 +20,7 @@
 // UNO interface or Calc depends on.
 #include <algorithm>
 #include <cctype>
+#include <cmath>
 #include <cstdio>
 #include <fstream>
 #include <iostream>
@@ -28,7 +29,9 @@
 #include <string>
 #include <vector>
 
+#include "isentra/surface/call.hpp"
 #include "isentra/surface/catalogue.hpp"
+#include "isentra/surface/formula.hpp"
 #include "isentra/units/units.hpp"
 #include "wizard_text.hpp"
 
@@ -306,19 +309,142 @@ std::string anchor(const std::string& name) {
     return a;
 }
 
+std::string num6(double v) {
+    if (std::isnan(v)) return "#NUM!";
+    char b[64];
+    std::snprintf(b, sizeof b, "%.6g", v);
+    return b;
+}
+
+std::string si_symbol(isentra::Quantity q) {
+    if (q == isentra::Quantity::None || q == isentra::Quantity::Text) return "";
+    return isentra::units::symbol(q, "SI");
+}
+
+std::string us_symbol(isentra::Quantity q) {
+    if (q == isentra::Quantity::None || q == isentra::Quantity::Text) return "";
+    return isentra::units::symbol(q, "US");
+}
+
+std::size_t missing_examples = 0;
+
+// The worked example of f, computed now with isentra::call() through the
+// call-text parser (the same path as the command-line tool): markdown, or
+// "" if f has none. A failing example is a catalogue error.
+std::string worked_example(const cat::Function& f) {
+    if (f.example.empty()) {
+        std::cerr << "isentra_gen: warning: function \"" << f.name
+                  << "\" has no worked example (catalogue::Function::example) for docs/functions.md\n";
+        ++missing_examples;
+        return "";
+    }
+    const std::string where = "function \"" + f.name + "\": its example " + f.example;
+    isentra::formula::ParsedCall pc;
+    try {
+        pc = isentra::formula::parse(f.example);
+    } catch (const std::exception& e) {
+        fail(where + " does not parse: " + e.what());
+        return "";
+    }
+    if (pc.function != &f) {
+        fail(where + " calls another function");
+        return "";
+    }
+    const isentra::Table r = isentra::call(f, pc.args);
+    std::ostringstream o;
+    o << "\nExample: `=" << f.example << "`";
+    if (r.rows == 1 && r.cols == 1) {
+        const isentra::Value& v = r.cells[0];
+        switch (v.kind) {
+        case isentra::Value::Kind::Number: {
+            const std::string u = si_symbol(f.result);
+            o << " gives **" << num6(v.number) << "**" << (u.empty() ? "" : " " + md(u)) << ".\n";
+            break;
+        }
+        case isentra::Value::Kind::Text: o << " gives \"" << md(v.text) << "\".\n"; break;
+        case isentra::Value::Kind::Empty: o << " gives an empty result.\n"; break;
+        case isentra::Value::Kind::Error: fail(where + " gives an error: " + v.text); return "";
+        }
+        return o.str();
+    }
+    o << " (an array formula over " << r.cols << " cells) gives:\n\n|";
+    for (std::size_t c = 0; c < r.cols; ++c) {
+        std::string h = c < f.row_names.size() ? f.row_names[c] : "";
+        const std::string u = c < f.row_quantities.size() ? si_symbol(f.row_quantities[c]) : "";
+        o << " " << md(h) << (u.empty() ? "" : " (" + md(u) + ")") << " |";
+    }
+    o << "\n|";
+    for (std::size_t c = 0; c < r.cols; ++c) o << "---|";
+    o << "\n|";
+    bool any_error = false;
+    for (std::size_t c = 0; c < r.cols; ++c) {
+        const isentra::Value& v = r.at(0, c);
+        if (v.kind == isentra::Value::Kind::Error) {
+            any_error = true;
+            o << " #NUM! |";
+        } else if (v.kind == isentra::Value::Kind::Number) {
+            o << " " << num6(v.number) << " |";
+        } else {
+            o << " " << md(v.text) << " |";
+        }
+    }
+    o << "\n";
+    if (any_error) o << "\n#NUM! marks a value the state does not have (STEAM.EXPLAIN gives the reason).\n";
+    return o.str();
+}
+
 std::string functions_md(const std::vector<cat::Function>& fs) {
     std::ostringstream o;
     o << "<!-- " << banner << "\n     Refresh with: cmake --build <build dir> --target update-docs -->\n\n"
       << "# Isentra function reference\n\n"
       << "Isentra " << cat::version() << " adds " << fs.size()
-      << " functions to LibreOffice Calc. This reference separates arguments with `;`; Calc may show "
-         "another separator, depending on the settings under Tools > Options > LibreOffice Calc > "
-         "Formula. Every argument can be a number, a text or "
-         "a cell reference; numeric arguments can also be ranges, which give an array result (enter it as an "
-         "array formula, Ctrl+Shift+Enter). Arguments in [brackets] are optional.\n\n"
-      << "Units: the optional last argument `units` chooses the unit system for all inputs and the result, "
-         "e.g. \"SI\" (default) or \"US\". An invalid input gives an error value (Err:502 for a single value); "
-         "`=STEAM.EXPLAIN(\"NAME\"; same arguments)` returns the reason as a sentence.\n\n";
+      << " functions to LibreOffice Calc, listed below by category with their arguments, the units of "
+         "each, what they accept and a worked example whose result Isentra itself computed when this "
+         "page was made. This page separates arguments with `;`; Calc may show another separator, "
+         "depending on Tools > Options > LibreOffice Calc > Formula. Arguments in [brackets] are "
+         "optional; the others are required, and Calc refuses a call without them (Err:504).\n\n"
+      << "Results feed decisions about pressure equipment: check them, and defer to the codes that apply "
+         "where you work and to a licensed engineer.\n\n";
+
+    // ---- once, for every function -------------------------------------------
+    o << "## Units\n\n"
+      << "Every function with quantities takes an optional argument `units` (the last one, or the last "
+         "but `header`): a text that sets the units of **all** its inputs and of its result. Leave it out for SI. It may be a "
+         "cell reference, so one cell can set a whole workbook; the readings in the sheet are then read "
+         "in those units and the results come out in them.\n\n"
+      << "A units text is a unit system, optionally followed by overrides of single quantities written "
+         "`key=unit`, separated by blanks: \"US\", \"US p=psig\", \"SI p=barg T=K\", \"BAR h=kcal/kg\". "
+         "A text that starts with an override or a bare unit, such as \"psig\" or \"p=psig\", means SI "
+         "with that one quantity changed: `STEAM.TSAT(150; \"psig\")` reads 150 psig and answers in °C. "
+         "Gauge pressures are relative to the standard atmosphere (101.325 kPa) unless the text gives "
+         "the local barometric pressure, e.g. \"US p=psig patm=14.2psia\". Unit spellings are "
+         "case-insensitive where that is unambiguous. Temperature differences (TTD, DCA, approach, "
+         "superheat, rise, uncertainties of temperatures) convert as differences. Conversion factors are "
+         "exact from NIST SP 811 (2008) Appendix B and the international yard and pound.\n\n"
+      << "| system | units (override key, unit) |\n|---|---|\n";
+    for (const auto& sys : isentra::units::known_systems())
+        o << "| " << md(sys.name) << " | " << md(sys.description) << " |\n";
+    o << "\nEach function below gives the unit of every argument and of its result in SI and US; the "
+         "other systems and every unit symbol are in [Unit symbols](#unit-symbols) at the end.\n\n"
+      << "## Blank cells, ranges and errors\n\n"
+      << "- **A blank cell counts as 0.** Calc passes a reference to an empty cell to an add-in as the "
+         "number 0 before the add-in sees it, so `=STEAM.H.PT(1; Z1)` with Z1 empty is the enthalpy at "
+         "0 °C, not an error. Check that the cells a formula reads are filled in, or leave the result "
+         "blank while a reading is blank (the Isentra workbooks do). A blank cell inside a range of two "
+         "or more cells is an error (\"the argument T is empty\").\n"
+      << "- **Ranges.** Numeric arguments may be ranges: `{=STEAM.H.PT(A2:A500; B2:B500)}` converts a "
+         "whole column in one array formula (Ctrl+Shift+Enter); a single value is used for every row.\n"
+      << "- **Errors.** An invalid input gives an error value: Err:502 in a cell, #NUM! for one element "
+         "of an array result, Err:504 when a required argument is missing or there are too many. "
+         "`=STEAM.EXPLAIN(\"H.PT\"; same arguments)` returns the reason as a sentence in your units.\n\n"
+      << "## Ranges of validity\n\n"
+      << "Water and steam properties follow IAPWS-IF97 (IAPWS R7-97(2012)), valid for 273.15 K to "
+         "1073.15 K (0 °C to 800 °C) at pressures up to 100 MPa and for 1073.15 K to 2273.15 K (800 °C to "
+         "2000 °C) up to 50 MPa (R7-97(2012) Sec. 2). Saturation properties exist from the triple point "
+         "to the critical point (611.657 Pa to 22.064 MPa, 273.16 K to 647.096 K); viscosity (IAPWS "
+         "R12-08), thermal conductivity (IAPWS R15-11) and surface tension (IAPWS R1-76(2014)) have the "
+         "ranges their releases give. Outside them a function gives an error, never an extrapolated "
+         "number. Each argument below says what else it accepts.\n\n";
 
     // Categories in order of first appearance.
     std::vector<std::string> cats;
@@ -336,47 +462,48 @@ std::string functions_md(const std::vector<cat::Function>& fs) {
             }
         o << "\n";
     }
+    o << "- [Unit symbols](#unit-symbols); for developers: [UNO method names](#uno-method-names)\n";
     for (const std::string& c : cats) {
         o << "\n## " << md(c) << "\n";
         for (const cat::Function& f : fs) {
             if (f.category != c) continue;
-            o << "\n### " << f.name << "\n\n`" << signature(f) << "`\n\n" << md(cat::describe_function(f)) << "\n";
+            o << "\n### " << f.name << "\n\n`" << signature(f) << "`\n\n" << md(f.summary);
+            if (f.kind == cat::ResultKind::Number && f.result != isentra::Quantity::None &&
+                f.result != isentra::Quantity::Text)
+                o << " Result in " << md(si_symbol(f.result)) << " (SI), " << md(us_symbol(f.result)) << " (US).";
+            o << "\n";
             if (!f.note.empty()) o << "\n" << md(f.note) << "\n";
             if (f.kind == cat::ResultKind::Row) {
                 o << "\nResult columns:";
                 for (std::size_t i = 0; i < f.row_names.size(); ++i) {
-                    const std::string si = isentra::units::symbol(f.row_quantities[i], "SI");
-                    const std::string us = isentra::units::symbol(f.row_quantities[i], "US");
+                    const std::string si = si_symbol(f.row_quantities[i]), us = us_symbol(f.row_quantities[i]);
                     o << (i ? ", " : " ") << md(f.row_names[i]);
                     if (!si.empty()) o << " (" << md(si) << (us != si ? "; " + md(us) : "") << ")";
                 }
                 o << ".\n";
             }
             if (!f.args.empty()) {
-                o << "\n| argument | description |\n|---|---|\n";
+                o << "\n| argument | what it is, what it accepts | SI | US |\n|---|---|---|---|\n";
                 for (std::size_t i = 0; i < f.args.size(); ++i) {
                     const cat::Arg& a = f.args[i];
-                    o << "| " << md(a.name) << (a.varargs ? "..." : "") << (a.optional ? " (optional)" : "") << " | "
-                      << md(cat::describe_arg(f, i)) << " |\n";
+                    std::string name = md(a.name) + (a.varargs ? "..." : "") + (a.optional ? " (optional)" : "");
+                    if (i == f.units_index()) {
+                        o << "| " << name << " | the units of all inputs and the result, see [Units](#units) | | |\n";
+                        continue;
+                    }
+                    std::string d = a.description;
+                    if (!d.empty() && d.back() != '.') d += ".";
+                    o << "| " << name << " | " << md(d) << " | " << md(si_symbol(a.quantity)) << " | "
+                      << md(us_symbol(a.quantity)) << " |\n";
                 }
             }
-            o << "\nUNO method: `org.isentra.XSteamFunctions::" << f.method << "`\n";
+            o << worked_example(f);
         }
     }
 
     // Units, from the core's unit table (the same one the functions use).
-    o << "\n## Units\n\n"
-      << "The `units` argument names a unit system, optionally followed by overrides of single "
-         "quantities as `key=unit`, e.g. \"US p=psig\", \"SI p=barg T=K\", \"BAR h=kcal/kg\". "
-         "Gauge pressures are relative to the standard atmosphere (101.325 kPa) unless the text gives "
-         "the local barometric pressure, e.g. \"US p=psig patm=14.2psia\". Unit spellings are "
-         "case-insensitive where that is unambiguous. Temperature differences (superheat, "
-         "subcooling, approach, rise) convert as differences. Conversion factors are exact from "
-         "NIST SP 811 (2008) Appendix B and the international yard and pound.\n\n"
-      << "| system | units (override key, unit) |\n|---|---|\n";
-    for (const auto& sys : isentra::units::known_systems())
-        o << "| " << md(sys.name) << " | " << md(sys.description) << " |\n";
-    o << "\nEvery unit, by quantity (the symbol is what `STEAM.CONVERT` and overrides accept):\n";
+    o << "\n## Unit symbols\n\n"
+      << "Every unit, by quantity: the symbol is what `STEAM.CONVERT` and overrides (`key=unit`) accept.\n";
     std::vector<isentra::Quantity> qs;
     for (const auto& u : isentra::units::known_units())
         if (std::find(qs.begin(), qs.end(), u.quantity) == qs.end()) qs.push_back(u.quantity);
@@ -385,6 +512,16 @@ std::string functions_md(const std::vector<cat::Function>& fs) {
         for (const auto& u : isentra::units::known_units())
             if (u.quantity == q) o << "| `" << u.symbol << "` | " << md(u.description) << " |\n";
     }
+
+    // Developers' appendix: the stored names.
+    o << "\n## UNO method names\n\n"
+      << "For developers and for reading a saved file. A document stores each call under the add-in's "
+         "service and the function's UNO method, e.g. `of:=ORG.ISENTRA.STEAMFUNCTIONS.HPT(A2;B2)` for "
+         "STEAM.H.PT; these names never change. All methods belong to the interface "
+         "`org.isentra.XSteamFunctions`; a required argument is declared `sequence<sequence<any>>`, an "
+         "optional one `any`, a list `sequence<any>` (DEVELOPERS.md, \"How the add-in talks to Calc\").\n\n"
+      << "| function | UNO method |\n|---|---|\n";
+    for (const cat::Function& f : fs) o << "| " << f.name << " | `" << f.method << "` |\n";
     return o.str();
 }
 

@@ -59,6 +59,10 @@ struct Function {
     // Longer documentation (source, section, simplification), shown in
     // docs/functions.md only, not in the Function Wizard. May be empty.
     std::string note;
+    // A worked example for docs/functions.md: a call as written in a cell,
+    // SI units, e.g. "STEAM.H.PT(16.62; 538.4)". The docs generator computes
+    // its result with isentra::call(), so the number shown is real.
+    std::string example;
     std::vector<Arg> args;
     Quantity result = Quantity::None;
     ResultKind kind = ResultKind::Number;
