@@ -371,6 +371,13 @@ void add_examples(std::vector<Function>& out) {
         const std::size_t d1 = f.name.find('.'), d2 = f.name.rfind('.');
         if (d1 == d2 || f.name.find('.', d1 + 1) != d2) continue;  // STEAM.<A>.<B> only
         const std::string prop = f.name.substr(d1 + 1, d2 - d1 - 1), in = f.name.substr(d2 + 1);
+        // Metastable (supercooled) vapour, STEAM.<prop>MV.<pair>: 0.1 MPa, 8-10 K below Tsat.
+        if (prop.size() > 2 && prop.compare(prop.size() - 2, 2, "MV") == 0) {
+            if (in == "PT") f.example = f.name + "(0.1; 90)";
+            if (in == "PH") f.example = f.name + "(0.1; 2660)";
+            if (in == "PS") f.example = f.name + "(0.1; 7.3)";
+            continue;
+        }
         for (const auto& e : by_pair)
             if (in == e.first) {
                 std::string a = e.second;

@@ -363,7 +363,9 @@ std::string worked_example(const cat::Function& f) {
         }
         case isentra::Value::Kind::Text: o << " gives \"" << md(v.text) << "\".\n"; break;
         case isentra::Value::Kind::Empty: o << " gives an empty result.\n"; break;
-        case isentra::Value::Kind::Error: fail(where + " gives an error: " + v.text); return "";
+        case isentra::Value::Kind::Error:
+            fail(where + " gives an error: " + v.text + " (change the example in the catalogue's add_examples)");
+            return "";
         }
         return o.str();
     }
