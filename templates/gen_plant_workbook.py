@@ -221,10 +221,9 @@ def units_cell_row(system):
 
 
 def units_note(system):
-    return ("The units cell B5 says which units every reading is entered in and every result comes out in."
-            " Changing it does not convert the readings already typed; it reads them in the other units."
-            " SI: MPa (absolute), °C, K, kg/s, kJ/kg, kJ/kWh.  US: psia, °F, Δ°F, lbm/h, Btu/lbm, Btu/kWh."
-            f" Powers in MW or kW either way. The charts' axis titles are fixed for {system}.")
+    return ("B5: the units the readings are entered in and the results come out in; changing it does not"
+            " convert readings already typed. SI: MPa (absolute), °C, K, kg/s, kJ/kg, kJ/kWh. US: psia, °F,"
+            f" Δ°F, lbm/h, Btu/lbm, Btu/kWh. Powers in MW or kW. Chart axis titles: {system}.")
 
 
 # ---------------------------------------------------------------- charts
@@ -342,7 +341,7 @@ def heater_checks(c):
         (R_CASC, "Drains cascade in (row 9 names a heater)", f"LEN(TRIM({r(R_CASC_FROM)}))>0"),
         (R_OK_PT, "Readings complete: pressures and temperatures (rows 10-15)",
          f"COUNT([.{c}{R_PSH}:.{c}{R_TDR}])={R_TDR - R_PSH + 1}"),
-        (R_OK_FLOW, "Readings complete: flows (row 16; with cascading drains row 17 and that heater's drain)",
+        (R_OK_FLOW, "Readings complete: flows (row 16; row 17 with a cascade)",
          f"AND({r(R_OK_PT)};ISNUMBER({r(R_MFW)});OR(NOT({r(R_CASC)});COUNT({r(R_MCASC)};{r(R_RES['h_casc'])})=2))"),
     ]
 
@@ -384,8 +383,8 @@ def heater_results(c):
 def heaters_sheet(demo, system):
     s = Sheet(2 + len(HEATER_COLS))
     us = system == "US"
-    s.header("Harrow Fen Power Station, Unit 2 (a fictional plant): feedwater heater, pump and heat rate test"
-             + (", US units" if us else "") if demo
+    s.header("Harrow Fen Power Station, Unit 2 (a fictional plant): heater, pump and heat rate test"
+             + (", US" if us else "") if demo
              else "Plant performance test: closed feedwater heaters, feed and condensate pumps, heat rate",
              "Routine performance test at 660 MW, invented readings for the Isentra demo. Heaters are in columns;"
              " drains cascade from HP7 to HP6 and from LP4 to LP3."
@@ -533,12 +532,12 @@ def run_checks(c):
         return ref(c, n)
     return [
         (H_RH, "Reheat (row 14 above 0)", f"AND(ISNUMBER({r(14)});{r(14)}>0)"),
-        (H_OK_MAIN, "Readings complete: main steam, feedwater, reheat flow, output (rows 9-14, 19)",
+        (H_OK_MAIN, "Readings complete: rows 9-14 and 19 (steam, output)",
          f"COUNT([.{c}9:.{c}14];{r(19)})=7"),
-        (H_OK_RH, "Readings complete: reheat pressures and temperatures (rows 15-18)", f"COUNT([.{c}15:.{c}18])=4"),
-        (H_READY, "Ready for the heat rate (row 26, and row 27 with reheat)",
+        (H_OK_RH, "Readings complete: reheat p and T (rows 15-18)", f"COUNT([.{c}15:.{c}18])=4"),
+        (H_READY, "Ready for the heat rate (row 26; row 27 with reheat)",
          f"AND({r(H_OK_MAIN)};OR(NOT({r(H_RH)});{r(H_OK_RH)}))"),
-        (H_OK_NET, "Readings complete: auxiliary power and boiler efficiency (rows 20-21)", f"COUNT([.{c}20:.{c}21])=2"),
+        (H_OK_NET, "Readings complete: aux. power, boiler eff. (rows 20-21)", f"COUNT([.{c}20:.{c}21])=2"),
     ]
 
 
@@ -587,9 +586,9 @@ def heat_rate_sheet(demo, system):
     s.add([c_text("Readings (one column per test run)", "subtitle")], expect=7)
     values = (us_columns(RUNS, RUN_ROWS) if us else RUNS) if demo else None
     s.readings(RUN_ROWS, len(RUN_COLS), values, [f"Run {k + 1}" for k in range(len(RUN_COLS))])
-    s.add([c_text("1 kWh per kWh: the heat rate of a cycle without losses (STEAM.CONVERT of 3600 kJ/kWh)", "label"),
+    s.add([c_text("1 kWh per kWh in the heat rate's unit (a lossless cycle)", "label"),
            unit_cell("hr"), c_formula(f'{ADDIN}CONVERT(3600;"kJ/kWh";[.$B${HR_KWH}])', "result_2")], expect=HR_KWH)
-    s.add([c_text("Units text of the heat rate calls: the units cell with powers in MW", "label"), c_blank("unit"),
+    s.add([c_text("Units text of the heat rate calls (powers in MW)", "label"), c_blank("unit"),
            c_formula(f'{UNITS}&" P=MW"', "result", True)], expect=HR_UNITS)
     s.checks(RUN_COLS, run_checks)
     s.add([c_empty()])

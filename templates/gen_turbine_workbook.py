@@ -108,7 +108,7 @@ SAT_T = list(range(60, 341, 10))
 # Test, the state point whose entropy the s grid starts from, the grid's span
 # as fractions of that entropy). An inlet isobar runs mostly to lower s (down
 # the expansion), an exhaust isobar to higher s; each is labelled at its
-# high-s end, which stays inside the chart.
+# high-s end (the label left of it, above the line), inside the chart.
 ISOBARS = [
     ("HP inlet", "C", ("HP", 1), (-0.045, 0.015)),
     ("HP exhaust", "E", ("HP", 3), (-0.015, 0.045)),
@@ -132,9 +132,9 @@ MARK_COL0 = col_index("AU")
 # expansion from main steam down to a wet LP exhaust.
 AXES = {
     ("demo", "SI"): (6.2, 7.8, 0.2, 2600.0, 3700.0, 100.0),
-    ("demo", "US"): (1.48, 1.86, 0.02, 1100.0, 1600.0, 50.0),
+    ("demo", "US"): (1.45, 1.85, 0.05, 1100.0, 1600.0, 50.0),
     ("blank", "SI"): (5.6, 8.4, 0.4, 2000.0, 3700.0, 100.0),
-    ("blank", "US"): (1.34, 2.0, 0.06, 850.0, 1600.0, 50.0),
+    ("blank", "US"): (1.3, 2.0, 0.1, 850.0, 1600.0, 50.0),
 }
 AXIS_UNITS = {"SI": ("kJ/(kg·K)", "kJ/kg"), "US": ("Btu/(lbm·°F)", "Btu/lbm")}
 
@@ -228,7 +228,7 @@ def test_sheet(readings, system, chart_cell_xml):
     rows.append(row([c_text("h-s chart: saturated-vapour line, isobars of the section pressures at T1, each section's"
                             " expansion line (inlet to exhaust), the test points, and the isentropic end points", "subtitle")]))
     rows.append(row([chart_cell_xml]))
-    for _ in range(30):  # room for the chart (14 cm) before the note under it
+    for _ in range(33):  # room for the chart (14 cm) before the note under it
         rows.append(row([c_empty()]))
     s_u, h_u = AXIS_UNITS[system]
     other = "isentra-turbine-section-test-us.ots" if system == "SI" else "isentra-turbine-section-test.ots"
@@ -328,7 +328,7 @@ def data_sheet():
         centre = f"[.{SCOL[sec][k]}2]"
         pref = f"[$Test.{pcol}{FIRST_ROW}]"
         put(1, cs, c_text(f"{name} s"))
-        put(1, ch, c_formula(f'"{name} "&IF(ISNUMBER({pref});TEXT({pref};"0.000")&" "&{p_unit()};"isobar")', string=True))
+        put(1, ch, c_formula(f'"{name} "&IF(ISNUMBER({pref});TEXT({pref};"General")&" "&{p_unit()};"isobar")', string=True))
         for n in range(ISO_N):
             r = 2 + n
             frac = round(lo + (hi - lo) * n / (ISO_N - 1), 6)
@@ -403,7 +403,7 @@ def chart_content(kind, system):
               # the label at an isobar's end: its series name (the isobar's pressure in the units in use)
               '<style:style style:name="isoLab" style:family="chart"><style:chart-properties chart:data-label-number="none" '
               'chart:data-label-text="false" chart:data-label-symbol="false" chart:data-label-series="true" '
-              'chart:label-position="right"/><style:text-properties fo:font-size="7pt"/></style:style>']
+              'chart:label-position="left"/><style:text-properties fo:font-size="7pt"/></style:style>']
     series = []
     for lab, xr, yr, key in series_list():
         colour, width, dash, sym, line = SERIES_LOOK[key]
