@@ -71,6 +71,9 @@ const char* core_symbol(Quantity q) noexcept {
         case Quantity::Power: return "kW";
         case Quantity::HeatRate: return "kJ/kWh";
         case Quantity::Percent: return "%";
+        case Quantity::DifferentialPressure: return "Pa";
+        case Quantity::Length: return "m";
+        case Quantity::LinearExpansion: return "1/K";
         case Quantity::Text: return "";
     }
     return "";

@@ -71,6 +71,11 @@ constexpr long double Pa_per_atm = 101325.0L;        // standard atmosphere, NIS
 constexpr long double Pa_per_kgf_cm2 = g_n * 1.0e4L;  // kgf/cm2, NIST SP 811 (2008) B.8: 9.80665 E+04, exact
 constexpr long double W_per_hp = 550.0L * m_per_ft * N_per_lbf;  // 550 ft lbf/s, NIST SP 811 B.8: 7.456999 E+02
 constexpr long double K_per_degF = 1.0L / 1.8L;      // NIST SP 811 (2008) B.8: interval 5/9 K
+// Inch of water at 60 degF, NIST SP 811 (2008) B.8: 2.4884 E+02 Pa (the conventional column of
+// differential-pressure transmitters in US plants; NIST gives no exact definition, this is its factor).
+constexpr long double Pa_per_inH2O_60F = 248.84L;
+// Millimetre of water, conventional (1000 kg/m3 under g_n), NIST SP 811 (2008) B.8: 9.80665 E+00 Pa, exact.
+constexpr long double Pa_per_mmH2O = g_n;
 
 // A linear unit: `num/den` core units per user unit.
 constexpr UnitDef lin(Q q, const char* sym, const char* disp, long double num, long double den,
@@ -233,6 +238,33 @@ constexpr UnitDef kUnits[] = {
     // Dimensionless, core fraction
     lin(Q::None, "fraction", "", 1.0L, 1.0L, "1|dimensionless", "dimensionless number"),
     lin(Q::None, "%", "%", 0.01L, 1.0L, "percent", "dimensionless number shown in percent"),
+
+    // Differential pressure, core Pa (a difference: neither absolute nor gauge)
+    lin(Q::DifferentialPressure, "Pa", "Pa", 1.0L, 1.0L, "N/m2", "pascal (differential)"),
+    lin(Q::DifferentialPressure, "kPa", "kPa", 1.0e3L, 1.0L, "kPad|kPa(d)", "kilopascal (differential)"),
+    lin(Q::DifferentialPressure, "MPa", "MPa", 1.0e6L, 1.0L, "MPad|MPa(d)", "megapascal (differential)"),
+    lin(Q::DifferentialPressure, "mbar", "mbar", 100.0L, 1.0L, "mbard|mbar(d)",
+        "millibar = 100 Pa (differential)"),  // NIST SP 811 B.8 (bar), exact
+    lin(Q::DifferentialPressure, "bar", "bar", 1.0e5L, 1.0L, "bard|bar(d)", "bar = 100 kPa (differential)"),
+    lin(Q::DifferentialPressure, "inH2O", "inH₂O", Pa_per_inH2O_60F, 1.0L,
+        "in H2O|inH2O(60F)|inH2O(60degF)|inWC|in WC|inWG",
+        "inch of water at 60 °F = 248.84 Pa (NIST SP 811 B.8; differential)"),
+    lin(Q::DifferentialPressure, "mmH2O", "mmH₂O", Pa_per_mmH2O, 1.0L, "mm H2O|mmWC|mm WC",
+        "millimetre of water, conventional = 9.80665 Pa (NIST SP 811 B.8; differential)"),
+    lin(Q::DifferentialPressure, "psi", "psi", Pa_per_psi, 1.0L, "psid|psi(d)|lbf/in2",
+        "pound-force per square inch (differential) = 6894.757293168361 Pa"),
+
+    // Length, core m (diameters)
+    lin(Q::Length, "m", "m", 1.0L, 1.0L, "metre|meter", "metre"),
+    lin(Q::Length, "mm", "mm", 1.0e-3L, 1.0L, "millimetre|millimeter", "millimetre"),
+    lin(Q::Length, "cm", "cm", 1.0e-2L, 1.0L, "", "centimetre"),
+    lin(Q::Length, "in", "in", m_per_in, 1.0L, "inch", "inch = 25.4 mm"),
+    lin(Q::Length, "ft", "ft", m_per_ft, 1.0L, "foot|feet", "foot = 0.3048 m"),
+
+    // Linear thermal expansion coefficient, core 1/K
+    lin(Q::LinearExpansion, "1/K", "1/K", 1.0L, 1.0L, "/K|1/degC|/degC|per K", "per kelvin (= per degree Celsius)"),
+    lin(Q::LinearExpansion, "1/degF", "1/°F", 1.8L, 1.0L, "/degF|1/F|/F|1/degR|/degR",
+        "per degree Fahrenheit (= 1.8 per kelvin)"),
 };
 
 constexpr UnitDef kTextUnit{Q::Text, "", "", 1.0, 1.0, 0.0, 0.0, false, nullptr, "", "text"};
@@ -249,19 +281,20 @@ struct SystemDef {
 constexpr SystemDef kSystems[] = {
     {"SI", nullptr, "SI with MPa and °C (the default; also the empty text)",
      {"fraction", "MPa", "degC", "delta_K", "kJ/kg", "kJ/(kg K)", "m3/kg", "kg/m3", "m/s", "Pa s", "W/(m K)", "N/m",
-      "m2/s", "m2/s", "kg/s", "kW", "kJ/kWh", "%", ""}},
+      "m2/s", "m2/s", "kg/s", "kW", "kJ/kWh", "%", "kPa", "mm", "1/K", ""}},
     {"US", nullptr, "US customary units",
      {"fraction", "psia", "degF", "delta_degF", "Btu/lbm", "Btu/(lbm degF)", "ft3/lbm", "lbm/ft3", "ft/s",
-      "lbm/(ft h)", "Btu/(h ft degF)", "lbf/ft", "ft2/h", "ft2/h", "lbm/h", "kW", "Btu/kWh", "%", ""}},
+      "lbm/(ft h)", "Btu/(h ft degF)", "lbf/ft", "ft2/h", "ft2/h", "lbm/h", "kW", "Btu/kWh", "%", "inH2O", "in", "1/degF",
+      ""}},
     {"BAR", nullptr, "SI with bar (absolute) and °C",
      {"fraction", "bar", "degC", "delta_K", "kJ/kg", "kJ/(kg K)", "m3/kg", "kg/m3", "m/s", "Pa s", "W/(m K)", "N/m",
-      "m2/s", "m2/s", "kg/s", "kW", "kJ/kWh", "%", ""}},
+      "m2/s", "m2/s", "kg/s", "kW", "kJ/kWh", "%", "mbar", "mm", "1/K", ""}},
     {"KPA", nullptr, "SI with kPa (absolute) and °C",
      {"fraction", "kPa", "degC", "delta_K", "kJ/kg", "kJ/(kg K)", "m3/kg", "kg/m3", "m/s", "Pa s", "W/(m K)", "N/m",
-      "m2/s", "m2/s", "kg/s", "kW", "kJ/kWh", "%", ""}},
+      "m2/s", "m2/s", "kg/s", "kW", "kJ/kWh", "%", "kPa", "mm", "1/K", ""}},
     {"K", "SI-K", "SI with MPa and kelvin (the core units); also written SI-K",
      {"fraction", "MPa", "K", "delta_K", "kJ/kg", "kJ/(kg K)", "m3/kg", "kg/m3", "m/s", "Pa s", "W/(m K)", "N/m",
-      "m2/s", "m2/s", "kg/s", "kW", "kJ/kWh", "%", ""}},
+      "m2/s", "m2/s", "kg/s", "kW", "kJ/kWh", "%", "Pa", "m", "1/K", ""}},
 };
 // clang-format on
 constexpr std::size_t kSystemCount = sizeof kSystems / sizeof kSystems[0];
@@ -310,6 +343,12 @@ constexpr KeyDef kKeys[] = {
     {"heatrate", Q::HeatRate},
     {"pct", Q::Percent},
     {"percent", Q::Percent},
+    {"dp", Q::DifferentialPressure},
+    {"differential", Q::DifferentialPressure},
+    {"L", Q::Length},
+    {"length", Q::Length},
+    {"exp", Q::LinearExpansion},
+    {"expansion", Q::LinearExpansion},
 };
 
 constexpr int qi(Quantity q) { return static_cast<int>(q); }
@@ -612,6 +651,9 @@ std::string_view quantity_name(Quantity q) {
     case Q::Power: return "power";
     case Q::HeatRate: return "heat rate";
     case Q::Percent: return "percentage";
+    case Q::DifferentialPressure: return "differential pressure";
+    case Q::Length: return "length";
+    case Q::LinearExpansion: return "linear expansion coefficient";
     case Q::Text: return "text";
     }
     return "unknown quantity";

@@ -225,6 +225,9 @@ TEST(UnitsRoundTrip, EveryUnit) {
             case Quantity::Power: return "P";
             case Quantity::HeatRate: return "hr";
             case Quantity::Percent: return "pct";
+            case Quantity::DifferentialPressure: return "dp";
+            case Quantity::Length: return "L";
+            case Quantity::LinearExpansion: return "exp";
             default: return "?";
             }
         }();

@@ -26,6 +26,9 @@ enum class Quantity {
     Power,                // kW
     HeatRate,             // kJ/kWh
     Percent,              // % (efficiency or uncertainty shown as a percentage)
+    DifferentialPressure, // Pa (a difference of pressures, e.g. across a flow meter; never gauge/absolute)
+    Length,               // m (diameters of pipes and meter bores)
+    LinearExpansion,      // 1/K (linear thermal expansion coefficient of a material)
     Text                  // a text argument (units string, names); not converted
 };
 

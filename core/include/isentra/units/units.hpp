@@ -21,7 +21,8 @@
 //   p|pressure, T|temperature, dT|deltaT, h|energy, s|entropy|cp, v|volume,
 //   rho|density, w|speed, mu|viscosity, lambda|conductivity, sigma|tension,
 //   nu|kinematic, a|alpha|diffusivity, m|mdot|massflow, P|power, hr|heatrate,
-//   pct|percent.
+//   pct|percent, dp|differential (differential pressure), L|length (diameters),
+//   exp|expansion (linear expansion coefficient).
 // A unit given alone (e.g. "psig", "degF", "m2/s") overrides every quantity it
 // is a unit of: "degF" alone sets T=degF and dT=delta_degF, "m2/s" sets nu and a.
 // Explicit key=unit overrides are applied after bare units; the same key twice
