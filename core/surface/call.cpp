@@ -165,15 +165,23 @@ Quantity result_quantity_of(const Function& f, std::size_t c) {
     return f.kind == ResultKind::Row ? f.row_quantities[c] : f.result;
 }
 
+// Evaluates f numerically: eval_extra, eval_units or eval, whichever it has.
+void evaluate_raw(const Function& f, const units::UnitSpec& spec, const catalogue::Extra& extra, const double* a,
+                  double* res) {
+    if (f.eval_extra) f.eval_extra(a, res, spec, extra);
+    else if (f.eval_units) f.eval_units(a, res, spec);
+    else f.eval(a, res);
+}
+
 // Evaluates f on one state (a: numeric arguments in core units) and gives
 // each result element to put(c, Value). Shared by call() and PreparedCall.
 template <class Put>
-void evaluate_state(const Function& f, const units::UnitSpec& spec, const double* a, Put&& put) {
+void evaluate_state(const Function& f, const units::UnitSpec& spec, const catalogue::Extra& extra, const double* a,
+                    Put&& put) {
     double res[32];
     const std::size_t width = result_width(f);
     try {
-        if (f.eval_units) f.eval_units(a, res, spec);
-        else f.eval(a, res);
+        evaluate_raw(f, spec, extra, a, res);
         for (std::size_t c = 0; c < width; ++c) {
             const double v = res[c];
             if (!std::isfinite(v))
@@ -216,6 +224,56 @@ bool units_of_call(const Function& f, const std::vector<Table>& args, units::Uni
     return true;
 }
 
+// The texts other than units and the whole-range arguments of a function
+// with eval_extra (see catalogue::Extra). False with err set on a bad one.
+bool extra_of_call(const Function& f, const std::vector<Table>& args, catalogue::Extra& extra, Value& err) {
+    if (!f.eval_extra) return true;
+    const std::size_t units_index = f.units_index();
+    for (std::size_t i = 0; i < f.args.size(); ++i) {
+        const catalogue::Arg& ar = f.args[i];
+        if (ar.quantity == Quantity::Text && i != units_index) {
+            std::string text;
+            if (i < args.size()) {
+                const Table& t = args[i];
+                const Value& v = t.cells.empty() ? Value{} : t.cells[0];
+                if (v.kind == Value::Kind::Error) {
+                    err = v;
+                    return false;
+                }
+                if (!is_scalar(t) || v.kind == Value::Kind::Number) {
+                    err = Value::of_error(ErrorCode::InvalidArgument, "the argument " + ar.name + " must be a single text");
+                    return false;
+                }
+                if (v.kind == Value::Kind::Text) text = v.text;
+            }
+            extra.texts.push_back(std::move(text));
+        } else if (ar.whole_range) {
+            catalogue::NumberTable nt;
+            if (i < args.size()) {
+                const Table& t = args[i];
+                nt.rows = t.rows;
+                nt.cols = t.cols;
+                for (const Value& v : t.cells) {
+                    if (v.kind == Value::Kind::Number) {
+                        nt.v.push_back(v.number);
+                    } else if (v.kind == Value::Kind::Empty) {
+                        nt.v.push_back(std::nan(""));
+                    } else if (v.kind == Value::Kind::Error) {
+                        err = v;
+                        return false;
+                    } else {
+                        err = Value::of_error(ErrorCode::InvalidArgument, "the argument " + ar.name + " holds the text \"" +
+                                                                              v.text + "\" where numbers are expected");
+                        return false;
+                    }
+                }
+            }
+            extra.tables.push_back(std::move(nt));
+        }
+    }
+    return true;
+}
+
 }  // namespace
 
 Table call(const Function& f, const std::vector<Table>& args) {
@@ -230,12 +288,14 @@ Table call(const Function& f, const std::vector<Table>& args) {
         // Units.
         units::UnitSpec spec;
         if (!units_of_call(f, args, spec, err)) return error_table(err);
+        catalogue::Extra extra;  // texts and whole ranges for eval_extra
+        if (!extra_of_call(f, args, extra, err)) return error_table(err);
 
         // Header option of Row functions.
         bool header = false;
         std::vector<std::size_t> numeric;  // indices of the state's numeric arguments
         for (std::size_t i = 0; i < f.args.size(); ++i) {
-            if (f.args[i].quantity == Quantity::Text) continue;
+            if (f.args[i].quantity == Quantity::Text || f.args[i].whole_range) continue;
             if (i >= args.size()) {  // omitted optional argument: its default (NaN: the function decides)
                 if (f.args[i].name != "header") numeric.push_back(i);
                 continue;
@@ -317,7 +377,7 @@ Table call(const Function& f, const std::vector<Table>& args) {
                 for (std::size_t c = 0; c < width; ++c) put(c, result);
                 continue;
             }
-            evaluate_state(f, spec, a, put);
+            evaluate_state(f, spec, extra, a, put);
         }
         return out;
     } catch (const Error& e) {
@@ -356,10 +416,16 @@ PreparedCall::PreparedCall(const Function& f, const std::vector<Table>& args, co
             fail_text("the argument " + a.name + " of " + f.name + " must be written in the call, not read per state");
     }
     if (!units_of_call(f, args, spec_, err)) fail(err);
+    if (!extra_of_call(f, args, extra_, err)) fail(err);
     slots_.resize(slots.size());
     for (std::size_t i = 0; i < f.args.size(); ++i) {
         const catalogue::Arg& arg = f.args[i];
         if (arg.quantity == Quantity::Text) continue;
+        if (arg.whole_range) {
+            for (std::size_t k : slots)
+                if (k == i) fail_text("the argument " + arg.name + " of " + f.name + " must be written in the call, not read per state");
+            continue;
+        }
         if (arg.name == "header") {
             if (i >= args.size()) continue;
             if (!is_scalar(args[i])) fail_text("header must be a single value");
@@ -403,8 +469,7 @@ bool PreparedCall::eval(const double* in, double* out) const noexcept {
             const Slot& s = slots_[k];
             a[s.pos] = (s.own_units ? s.spec : spec_).to_core(s.arg->quantity, in[k]);
         }
-        if (f_->eval_units) f_->eval_units(a, res, spec_);
-        else f_->eval(a, res);
+        evaluate_raw(*f_, spec_, extra_, a, res);
         for (std::size_t c = 0; c < width_; ++c) {
             if (!std::isfinite(res[c])) return false;
             out[c] = spec_.from_core(result_quantity_of(*f_, c), res[c]);
@@ -427,7 +492,7 @@ void PreparedCall::eval(const Value* in, Value* out) const {
         }
     }
     try {
-        evaluate_state(*f_, spec_, a, [&](std::size_t c, Value v) { out[c] = std::move(v); });
+        evaluate_state(*f_, spec_, extra_, a, [&](std::size_t c, Value v) { out[c] = std::move(v); });
     } catch (const std::exception& e) {
         for (std::size_t c = 0; c < width_; ++c)
             out[c] = Value::of_error(ErrorCode::InvalidArgument, std::string("internal error: ") + e.what());

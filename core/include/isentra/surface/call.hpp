@@ -97,6 +97,7 @@ private:
     };
     const catalogue::Function* f_;
     units::UnitSpec spec_;
+    catalogue::Extra extra_;  // texts and whole ranges of an eval_extra function
     std::vector<Slot> slots_;
     std::vector<std::size_t> order_;  // slot indexes in argument order (call() checks arguments in that order)
     std::vector<double> a_;  // the numeric arguments in core units, constants filled in

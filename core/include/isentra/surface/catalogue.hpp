@@ -33,6 +33,9 @@ struct Arg {
     // optional argument: the function receives NaN and decides (e.g. h_casc
     // is needed only when m_casc is above 0).
     double default_value = std::numeric_limits<double>::quiet_NaN();
+    // A dimensionless numeric argument taken whole, not broadcast: a range
+    // (e.g. a calibration table) or a single value, handed to eval_extra.
+    bool whole_range = false;
 };
 
 enum class ResultKind {
@@ -43,6 +46,18 @@ enum class ResultKind {
 
 struct Function;
 
+// For functions with text arguments other than "units" (e.g. a device type)
+// or whole-range arguments: the texts in argument order ("" when omitted) and
+// the tables in argument order (row-major numbers; NaN for an empty cell).
+struct NumberTable {
+    std::size_t rows = 0, cols = 0;
+    std::vector<double> v;
+};
+struct Extra {
+    std::vector<std::string> texts;
+    std::vector<NumberTable> tables;
+};
+
 // Numeric evaluation: a[] holds the numeric arguments in core units (text
 // arguments are not included), `out` receives the result(s) in core units.
 // For ResultKind::Number, out[0]; for Row, out[0..row_len). Throws isentra::Error.
@@ -50,6 +65,9 @@ using Eval = std::function<void(const double* a, double* out)>;
 // The same for the few functions whose meaning depends on the units given
 // (e.g. an uncertainty as a fraction of a gauge reading).
 using EvalUnits = std::function<void(const double* a, double* out, const units::UnitSpec& spec)>;
+// With the texts and whole ranges (see Extra).
+using EvalExtra =
+    std::function<void(const double* a, double* out, const units::UnitSpec& spec, const Extra& extra)>;
 
 struct Function {
     std::string name;      // display name, e.g. "STEAM.H.PT"
@@ -68,6 +86,7 @@ struct Function {
     ResultKind kind = ResultKind::Number;
     Eval eval;
     EvalUnits eval_units;  // if set, called instead of eval
+    EvalExtra eval_extra;  // if set, called instead of eval and eval_units
     // Row results: the column names and their quantities.
     std::vector<std::string> row_names;
     std::vector<Quantity> row_quantities;
