@@ -442,6 +442,7 @@ std::vector<Function> build() {
     add_state_family(out);
     detail::add_equipment_family(out);
     detail::add_supplementary_family(out);
+    detail::add_flow_family(out);
     {
         Function f;
         f.name = "STEAM.CONVERT";

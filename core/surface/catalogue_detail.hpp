@@ -12,6 +12,8 @@ namespace isentra::catalogue::detail {
 
 // Turbine and plant-equipment functions (catalogue_equipment.cpp).
 void add_equipment_family(std::vector<Function>& out);
+// Flow measurement functions, ISO 5167 (catalogue_flow.cpp).
+void add_flow_family(std::vector<Function>& out);
 
 // Viscosity with the critical enhancement and the metastable-vapour family
 // (catalogue_supplementary.cpp).

@@ -52,7 +52,17 @@ inline const std::map<std::string, double>& by_name() {
         {"m_casc", 5.0}, {"h_casc", 700.0},
         {"m_ms", 100.0}, {"h_ms", 3400.0}, {"h_fw", 1000.0}, {"m_rh", 90.0}, {"h_hrh", 3500.0},
         {"h_crh", 3000.0}, {"P_gen", 100000.0}, {"P_aux", 5000.0}, {"eta_boiler", 0.88},
+        // flow meters (steam at 1 MPa, 200 degC): dp Pa, diameters m, flow kg/s; Re_D about 1e6
+        {"dp", 20000.0}, {"d", 0.11}, {"D", 0.22}, {"m", 3.0}, {"beta", 0.5}, {"Re_D", 1.0e6}, {"C", 0.99},
+        {"u_dp", 0.002}, {"u_p", 0.0025}, {"u_T", 1.0}, {"u_d", 0.0005}, {"u_D", 0.004}, {"u_C", 0.003},
     };
+    return m;
+}
+
+// Text arguments other than units, by name (the flow meters' device types).
+inline const std::map<std::string, std::string>& text_by_name() {
+    static const std::map<std::string, std::string> m = {
+        {"taps", "flange"}, {"type", "ISA 1932"}, {"convergent", "as cast"}, {"kind", "nozzle"}};
     return m;
 }
 
@@ -126,6 +136,10 @@ inline Case make_case(const cat::Function& f, const std::string& units, bool hea
         }
         if (a.name == "header") {
             if (header) c.args.push_back(Arg{false, 1.0, ""});
+            continue;
+        }
+        if (a.quantity == Quantity::Text && text_by_name().count(a.name)) {
+            c.args.push_back(Arg{true, 0, text_by_name().at(a.name)});
             continue;
         }
         if (a.quantity == Quantity::Text || a.varargs) {
