@@ -160,10 +160,6 @@ Arg detail::units_arg() {
 namespace {
 using detail::units_arg;
 
-const char* const error_hint =
-    " An invalid input gives an error value; =STEAM.EXPLAIN(\"<name>\"; same arguments) shows why, in "
-    "your units.";
-
 void add_property_family(std::vector<Function>& out) {
     for (const PairSpec& pair : pairs) {
         for (const PropSpec& ps : props) {
@@ -486,12 +482,6 @@ std::vector<Function> build() {
     return out;
 }
 
-std::string unit_pair(Quantity q) {
-    if (q == Quantity::None || q == Quantity::Text) return "";
-    std::string si = units::symbol(q, "SI"), us = units::symbol(q, "US");
-    return " SI: " + si + "; US: " + us + ".";
-}
-
 }  // namespace
 
 std::size_t Function::units_index() const {
@@ -530,25 +520,6 @@ const Function* find(std::string_view name) {
     for (const Function& f : functions())
         if (same_ignoring_case(f.method, name)) return &f;
     return nullptr;
-}
-
-std::string describe_function(const Function& f) {
-    std::string d = f.summary;
-    if (f.kind == ResultKind::Number && f.result != Quantity::None) d += " Result" + unit_pair(f.result);
-    if (f.name != "STEAM.EXPLAIN" && f.name != "STEAM.VERSION") {
-        std::string hint = error_hint;
-        const std::string key = "<name>";
-        hint.replace(hint.find(key), key.size(), f.name.substr(6));
-        d += hint;
-    }
-    return d;
-}
-
-std::string describe_arg(const Function& f, std::size_t i) {
-    const Arg& a = f.args.at(i);
-    std::string d = a.description;
-    if (d.empty() || d.back() != '.') d += ".";
-    return d + unit_pair(a.quantity);
 }
 
 const char* version() { return ISENTRA_VERSION; }

@@ -26,7 +26,7 @@ namespace isentra::catalogue {
 struct Arg {
     std::string name;         // as shown in the Function Wizard, e.g. "p"
     Quantity quantity;        // Quantity::Text for text arguments (units, names)
-    std::string description;  // e.g. "Pressure"; units are appended by describe_arg()
+    std::string description;  // e.g. "Pressure"; the Wizard text adds the units (extension/gen/wizard_text.hpp)
     bool optional = false;    // only trailing arguments may be optional
     bool varargs = false;     // the last argument takes all remaining values (UNO sequence<any>)
     // Value of an omitted optional numeric argument, in core units. NaN for an
@@ -73,7 +73,11 @@ struct Function {
     std::string name;      // display name, e.g. "STEAM.H.PT"
     std::string method;    // UNO method name, e.g. "hPT" (frozen once released)
     std::string category;  // Function Wizard category
-    std::string summary;   // one sentence
+    // What the function does. Its first sentence (with the result units and
+    // "A blank cell counts as 0.") must fit the Function Wizard's three
+    // lines, which the generator checks (extension/gen/wizard_text.hpp); the
+    // whole summary is in docs/functions.md.
+    std::string summary;
     // Longer documentation (source, section, simplification), shown in
     // docs/functions.md only, not in the Function Wizard. May be empty.
     std::string note;
@@ -98,10 +102,6 @@ const std::vector<Function>& functions();
 // Finds a function by display name (case-insensitive, with or without the
 // "STEAM." prefix) or by UNO method name. nullptr if unknown.
 const Function* find(std::string_view name);
-
-// Function Wizard texts. Descriptions state units under "SI" and "US".
-std::string describe_function(const Function& f);
-std::string describe_arg(const Function& f, std::size_t i);
 
 // The version of the add-in (project version).
 const char* version();
