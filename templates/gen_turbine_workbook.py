@@ -309,15 +309,17 @@ def data_sheet():
                 put(2 + n, cs, c_formula(f"[.{sc}{2 + i}]"))
                 put(2 + n, ch, c_formula(f"[.{hc}{2 + i}]"))
                 n += 1
-    # Saturated-vapour line: the grid in degC, converted to degF for US.
+    # Saturated-vapour line: the grid in degC, converted by the add-in to the
+    # workbook's temperature unit (named in Y1: degC or degF).
     put(1, "U", c_text("T grid [°C]"))
     put(1, "V", c_text("T"))
     put(1, "W", c_text("s_g"))
     put(1, "X", c_text("saturated vapour"))
+    put(1, "Y", c_formula(f'IF(UPPER({UNITS})="US";"degF";"degC")', string=True))
     for k, t in enumerate(SAT_T):
         r = 2 + k
         put(r, "U", c_num(t))
-        put(r, "V", c_formula(f'IF(UPPER({UNITS})="US";1.8*[.U{r}]+32;[.U{r}])'))
+        put(r, "V", c_formula(f'{ADDIN}CONVERT([.U{r}];"degC";[.$Y$1])'))
         put(r, "W", c_formula(f"{ADDIN}SGT([.V{r}];{UNITS})"))
         put(r, "X", c_formula(f"{ADDIN}HGT([.V{r}];{UNITS})"))
     # Isobars: an s grid around the entropy of the state at that pressure (T1),
