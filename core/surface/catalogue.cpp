@@ -469,6 +469,7 @@ std::vector<Function> build() {
     detail::add_equipment_family(out);
     detail::add_supplementary_family(out);
     detail::add_flow_family(out);
+    detail::add_cycle_family(out);
     {
         Function f;
         f.name = "STEAM.CONVERT";

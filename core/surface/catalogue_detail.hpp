@@ -14,6 +14,8 @@ namespace isentra::catalogue::detail {
 void add_equipment_family(std::vector<Function>& out);
 // Flow measurement functions, ISO 5167 (catalogue_flow.cpp).
 void add_flow_family(std::vector<Function>& out);
+// Cycle heat-balance functions (catalogue_cycle.cpp).
+void add_cycle_family(std::vector<Function>& out);
 
 // Viscosity with the critical enhancement and the metastable-vapour family
 // (catalogue_supplementary.cpp).
