@@ -9,6 +9,7 @@
 // (LINEPOINT, EXHAUST, BALANCE). Names and methods are frozen once released.
 #include "catalogue_detail.hpp"
 
+#include <cmath>
 #include <string>
 #include <utility>
 
@@ -80,10 +81,8 @@ struct Inlet {
 };
 
 const Inlet inlets[] = {
-    {"PT", Arg{"T_in", Quantity::Temperature, "Section inlet temperature (superheated steam)"},
-     "an inlet given by pressure and temperature"},
-    {"PH", Arg{"h_in", Quantity::SpecificEnergy, "Section inlet specific enthalpy"},
-     "an inlet given by pressure and enthalpy (e.g. after a crossover or for wet steam)"},
+    {"PT", Arg{"T_in", Quantity::Temperature, "Section inlet temperature (superheated steam)"}, "inlet by (p,T)"},
+    {"PH", Arg{"h_in", Quantity::SpecificEnergy, "Section inlet specific enthalpy"}, "inlet by (p,h)"},
 };
 
 // ---- Expansion-line points --------------------------------------------------------
@@ -108,15 +107,15 @@ void add_line_points(std::vector<Function>& out) {
                       : cy::expansion_line_point_ph(a[0], a[1], a[2], a[3], a[4]);
         };
         out.push_back(number(("STEAM.TURBINE.HLINE." + code).c_str(), ("turbineHline" + code).c_str(), cat_turbine,
-                             "Specific enthalpy at an extraction pressure on the expansion line of a turbine "
-                             "section, from " + std::string(in.words) + ", the exhaust pressure and the section "
-                             "efficiency." + rule,
+                             "Enthalpy at an extraction pressure on a turbine section's expansion line, " +
+                                 std::string(in.words) + ". From the section's inlet, exhaust pressure and "
+                                 "efficiency." + rule,
                              args(), Quantity::SpecificEnergy,
                              [point](const double* a, double* o) { o[0] = point(a).h; }));
         out.push_back(row(("STEAM.TURBINE.LINEPOINT." + code).c_str(), ("turbineLinepoint" + code).c_str(),
                           cat_turbine,
-                          "State at an extraction pressure on the expansion line of a turbine section, from " +
-                              std::string(in.words) + ", as one row: h, T, s, x (equilibrium quality, above 1 "
+                          "State at an extraction pressure on a section's expansion line as a row, " +
+                              std::string(in.words) + ". The row: h, T, s, x (equilibrium quality, above 1 "
                               "superheated) and the position t on the line (0 inlet, 1 end point)." + rule +
                               " Enter as an array formula over 5 cells; with header = 1 the first row holds the "
                               "names and units.",
@@ -170,20 +169,20 @@ void add_wet_exhaust(std::vector<Function>& out) {
                       : cy::wet_exhaust_ph(a[0], a[1], a[2], a[3], a[4], loss);
         };
         out.push_back(number(("STEAM.TURBINE.ELEP." + code).c_str(), ("turbineElep" + code).c_str(), cat_turbine,
-                             "Expansion-line end point (ELEP) enthalpy of a turbine section with a wet exhaust, "
-                             "from " + std::string(in.words) + ", the exhaust pressure, the dry-steam efficiency "
-                             "and the Baumann coefficient." + rule,
+                             "Expansion-line end point (ELEP) of a wet-exhaust section, " + std::string(in.words) +
+                                 ". From the inlet, the exhaust pressure, the dry-steam efficiency and the "
+                                 "Baumann coefficient." + rule,
                              base(), Quantity::SpecificEnergy,
                              [ex](const double* a, double* o) { o[0] = ex(a, 0.0).h_elep; }));
         out.push_back(number(("STEAM.TURBINE.UEEP." + code).c_str(), ("turbineUeep" + code).c_str(), cat_turbine,
-                             "Used energy end point (UEEP) enthalpy of a turbine section with a wet exhaust, from " +
-                                 std::string(in.words) + ", the exhaust pressure, the dry-steam efficiency, the "
-                                 "Baumann coefficient and the exhaust loss." + rule + ueep,
+                             "Used energy end point (UEEP) of a wet-exhaust section, " + std::string(in.words) +
+                                 ". From the inlet, the exhaust pressure, the dry-steam efficiency, the Baumann "
+                                 "coefficient and the exhaust loss." + rule + ueep,
                              with_loss(), Quantity::SpecificEnergy,
                              [ex](const double* a, double* o) { o[0] = ex(a, a[5]).h_ueep; }));
         out.push_back(row(("STEAM.TURBINE.EXHAUST." + code).c_str(), ("turbineExhaust" + code).c_str(), cat_turbine,
-                          "Wet exhaust of a turbine section from " + std::string(in.words) + " as one row: ELEP "
-                          "enthalpy, temperature, entropy and quality, the wet efficiency eta_wet = (h_in - h_elep)/"
+                          "Wet exhaust of a turbine section as a row (ELEP, UEEP), " + std::string(in.words) +
+                              ". The row: ELEP enthalpy, temperature, entropy and quality, the wet efficiency eta_wet = (h_in - h_elep)/"
                           "(h_in - h_s), the mean moisture used, the UEEP enthalpy and its quality (1 - x is the "
                           "exhaust moisture)." + rule + ueep +
                               " Enter as an array formula over 8 cells; with header = 1 the first row holds the "
@@ -216,36 +215,46 @@ void add_wet_exhaust(std::vector<Function>& out) {
 void add_heaters(std::vector<Function>& out) {
     out.push_back(number(
         "STEAM.FWH.HDRAIN", "fwhHdrain", cat_equipment,
-        "Drain enthalpy of a closed feedwater heater with a drain cooler, from its drain cooler approach (ASME "
-        "PTC 12.1 definition DCA = T_drain - T_fw_in): h = h(p_shell, T_fw_in + DCA), subcooled liquid at the "
-        "shell pressure. An error if T_fw_in + DCA reaches the saturation temperature at p_shell.",
+        "Drain enthalpy of a closed feedwater heater from its drain cooler approach. ASME PTC 12.1 defines "
+        "DCA = T_drain - T_fw_in; h = h(p_shell, T_fw_in + DCA), subcooled liquid at the shell pressure. An error if T_fw_in + DCA reaches the saturation temperature at p_shell.",
         {p_arg("p_shell", "Heater shell pressure (extraction steam pressure at the heater)"),
          T_arg("T_fw_in", "Feedwater inlet temperature (the water entering the drain cooler)"),
          dT_arg("dca", "Drain cooler approach, 0 or more")},
         Quantity::SpecificEnergy, [](const double* a, double* o) { o[0] = cy::drain_enthalpy_dca(a[0], a[1], a[2]); }));
 
     const std::string da =
-        " Open heater, outlet saturated liquid at p_da: m_out = m_cond + m_drain + m_ext and m_out h'(p_da) = "
-        "m_cond h_cond + m_drain h_drain + m_ext h_ext, so m_ext = (m_out (h' - h_cond) - m_drain (h_drain - "
-        "h_cond))/(h_ext - h_cond).";
+        " Open heater, outlet saturated liquid at p_da: m_fw = m_cond + m_drain + m_ext and m_fw h'(p_da) = "
+        "m_cond h_fw_in + m_drain h_drain + m_ext h_ext, so m_ext = (m_fw (h' - h_fw_in) - m_drain (h_drain - "
+        "h_fw_in))/(h_ext - h_fw_in); m_drain and h_drain only for drains cascading in from the heaters above.";
     auto da_args = []() {
         return std::vector<Arg>{
+            m_arg("m_fw", "Feedwater flow leaving the deaerator (to the feed pump)"),
+            h_arg("h_fw_in", "Enthalpy of the condensate entering"),
             p_arg("p_da", "Deaerator (open heater) pressure; the outlet is saturated liquid at it"),
-            m_arg("m_out", "Flow leaving the deaerator (to the feed pump)"),
-            h_arg("h_cond", "Enthalpy of the condensate entering"),
             h_arg("h_ext", "Enthalpy of the heating (extraction) steam at the deaerator"),
-            m_arg("m_drain", "Drain flow cascading in from the heaters above (0 if none)"),
-            h_arg("h_drain", "Enthalpy of the drains cascading in")};
+            Arg{"m_drain", Quantity::MassFlow,
+                "Optional: drain flow cascading in from the heaters above; default 0 (none)", true, false, 0.0},
+            Arg{"h_drain", Quantity::SpecificEnergy,
+                "Optional: enthalpy of the drains cascading in; needed when m_drain is above 0", true}};
+    };
+    // a = m_fw, h_fw_in, p_da, h_ext, m_drain, h_drain
+    auto da_eval = [](const double* a) {
+        double h_drain = a[5];
+        if (a[4] == 0.0 && std::isnan(h_drain)) h_drain = a[1];  // no drains: their enthalpy plays no part
+        if (std::isnan(h_drain))
+            throw Error(ErrorCode::InvalidArgument,
+                        "the argument h_drain is missing: with a drain flow m_drain above 0, give the drains' "
+                        "enthalpy h_drain too");
+        return cy::deaerator(a[2], a[0], a[1], a[3], a[4], h_drain);
     };
     out.push_back(number("STEAM.DEAERATOR.EXTRACTION", "deaeratorExtraction", cat_equipment,
                          "Heating-steam (extraction) flow of an open deaerating heater from its mass and energy "
                          "balance." + da,
-                         da_args(), Quantity::MassFlow, [](const double* a, double* o) {
-                             o[0] = cy::deaerator(a[0], a[1], a[2], a[3], a[4], a[5]).m_ext;
-                         }));
+                         da_args(), Quantity::MassFlow,
+                         [da_eval](const double* a, double* o) { o[0] = da_eval(a).m_ext; }));
     out.push_back(row("STEAM.DEAERATOR.BALANCE", "deaeratorBalance", cat_equipment,
-                      "Mass and energy balance of an open deaerating heater as one row: extraction flow, "
-                      "condensate flow m_out - m_ext - m_drain, outlet enthalpy h'(p_da) and temperature "
+                      "Mass and energy balance of an open deaerating heater as a row. The row: extraction "
+                      "flow, condensate flow m_fw - m_ext - m_drain, outlet enthalpy h'(p_da) and temperature "
                       "Tsat(p_da)." + da +
                           " Enter as an array formula over 4 cells; with header = 1 the first row holds the names "
                           "and units.",
@@ -254,8 +263,8 @@ void add_heaters(std::vector<Function>& out) {
                        {"m_cond", Quantity::MassFlow},
                        {"h_out", Quantity::SpecificEnergy},
                        {"T_out", Quantity::Temperature}},
-                      [](const double* a, double* o) {
-                          const cy::Deaerator d = cy::deaerator(a[0], a[1], a[2], a[3], a[4], a[5]);
+                      [da_eval](const double* a, double* o) {
+                          const cy::Deaerator d = da_eval(a);
                           o[0] = d.m_ext;
                           o[1] = d.m_cond;
                           o[2] = d.h_out;
@@ -264,8 +273,8 @@ void add_heaters(std::vector<Function>& out) {
 
     out.push_back(row(
         "STEAM.FWH.DRAINPUMP.BALANCE", "fwhDrainpumpBalance", cat_equipment,
-        "Two closed feedwater heaters around a drain pumped forward, as one row: extraction flows of the upper "
-        "and the lower heater, the pumped drain flow, the drain flow cascading on below, and the enthalpy, "
+        "Two closed feedwater heaters around a drain pumped forward, as a row. The row: extraction flows of "
+        "the upper and the lower heater, the pumped drain flow, the drain flow cascading on below, and the enthalpy, "
         "temperature and upper-heater drain enthalpy at the mix point. The upper heater's drain cascades into "
         "the lower one; the fraction frac of the lower heater's drain is pumped into the feedwater line between "
         "the two (mix point), the rest cascades on. Energy balances: lower (m_fw - m_p)(h_fw_mid - h_fw_in) = "
@@ -275,19 +284,25 @@ void add_heaters(std::vector<Function>& out) {
         "(no circular reference in the sheet). frac = 0 is the plain cascade. Enter as an array formula over 7 "
         "cells; with header = 1 the first row holds the names and units.",
         {m_arg("m_fw", "Feedwater flow leaving the mix point (through the upper heater)"),
-         p_arg("p_fw", "Feedwater pressure at the mix point"),
          h_arg("h_fw_in", "Feedwater enthalpy at the lower heater's inlet"),
          h_arg("h_fw_mid", "Feedwater enthalpy at the lower heater's outlet (before the mix point)"),
          h_arg("h_fw_out", "Feedwater enthalpy at the upper heater's outlet"),
+         p_arg("p_fw", "Feedwater pressure at the mix point"),
          h_arg("h_ext", "Extraction steam enthalpy at the lower heater"),
          h_arg("h_drain", "Drain enthalpy of the lower heater (e.g. from STEAM.FWH.HDRAIN)"),
          h_arg("h_pumped", "Enthalpy of the lower heater's drain after the drain pump (e.g. STEAM.PUMP.HOUT.PT)"),
          h_arg("h_ext_up", "Extraction steam enthalpy at the upper heater"),
          p_arg("p_shell_up", "Upper heater shell pressure"),
          dT_arg("dca_up", "Upper heater drain cooler approach, referred to the water after the mix point"),
-         m_arg("m_casc_up", "Drain flow cascading into the upper heater from above (0 if none)"),
-         h_arg("h_casc_up", "Enthalpy of the drain cascading into the upper heater"),
-         frac_arg("frac", "Fraction of the lower heater's drain pumped forward: 1 all, 0 none (plain cascade)")},
+         Arg{"frac", Quantity::None,
+             "Optional: fraction of the lower heater's drain pumped forward, 0 to 1; default 1 (all); 0 is the "
+             "plain cascade",
+             true, false, 1.0},
+         Arg{"m_casc_up", Quantity::MassFlow,
+             "Optional: drain flow cascading into the upper heater from above; default 0 (none)", true, false, 0.0},
+         Arg{"h_casc_up", Quantity::SpecificEnergy,
+             "Optional: enthalpy of the drain cascading into the upper heater; needed when m_casc_up is above 0",
+             true}},
         {{"m_ext_up", Quantity::MassFlow},
          {"m_ext", Quantity::MassFlow},
          {"m_pumped", Quantity::MassFlow},
@@ -296,8 +311,16 @@ void add_heaters(std::vector<Function>& out) {
          {"T_mix", Quantity::Temperature},
          {"h_drain_up", Quantity::SpecificEnergy}},
         [](const double* a, double* o) {
-            const cy::DrainPump r = cy::pumped_drain(a[0], a[1], a[2], a[3], a[4], a[5], a[6], a[7], a[8], a[9],
-                                                     a[10], a[11], a[12], a[13]);
+            // a = m_fw, h_fw_in, h_fw_mid, h_fw_out, p_fw, h_ext, h_drain, h_pumped, h_ext_up, p_shell_up,
+            //     dca_up, frac, m_casc_up, h_casc_up
+            double h_casc = a[13];
+            if (a[12] == 0.0 && std::isnan(h_casc)) h_casc = a[8];  // no cascade: its enthalpy plays no part
+            if (std::isnan(h_casc))
+                throw Error(ErrorCode::InvalidArgument,
+                            "the argument h_casc_up is missing: with a drain flow m_casc_up above 0, give its "
+                            "enthalpy h_casc_up too");
+            const cy::DrainPump r = cy::pumped_drain(a[0], a[4], a[1], a[2], a[3], a[5], a[6], a[7], a[8], a[9],
+                                                     a[10], a[12], h_casc, a[11]);
             o[0] = r.m_ext_up;
             o[1] = r.m_ext;
             o[2] = r.m_pumped;

@@ -81,6 +81,24 @@ inline const std::map<std::string, std::map<std::string, double>>& overrides() {
         {"STEAM.PUMP.WORK.PH", {{"p_in", 0.1}, {"h_in", 167.6}, {"p_out", 10.0}, {"eta", 0.8}}},
         // desuperheater: 5 MPa steam at 450 degC sprayed down to 350 degC (Tsat 264 degC)
         {"STEAM.DESUPERHEATER.SPRAY", {{"T_out", 623.15}}},
+        // cycle family: extraction at 5 MPa on a 10 -> 2 MPa section; a wet exhaust at 10 kPa; a drain
+        // cooler at 1 MPa; a deaerator at 0.9 MPa; two heaters around a pumped drain at 2 MPa
+        {"STEAM.TURBINE.HLINE.PT", {{"p_ext", 5.0}}},
+        {"STEAM.TURBINE.HLINE.PH", {{"p_ext", 5.0}}},
+        {"STEAM.TURBINE.LINEPOINT.PT", {{"p_ext", 5.0}}},
+        {"STEAM.TURBINE.LINEPOINT.PH", {{"p_ext", 5.0}}},
+        {"STEAM.TURBINE.ELEP.PT", {{"p_out", 0.01}}},
+        {"STEAM.TURBINE.ELEP.PH", {{"p_out", 0.01}}},
+        {"STEAM.TURBINE.UEEP.PT", {{"p_out", 0.01}, {"h_loss", 30.0}}},
+        {"STEAM.TURBINE.UEEP.PH", {{"p_out", 0.01}, {"h_loss", 30.0}}},
+        {"STEAM.TURBINE.EXHAUST.PT", {{"p_out", 0.01}, {"h_loss", 30.0}}},
+        {"STEAM.TURBINE.EXHAUST.PH", {{"p_out", 0.01}, {"h_loss", 30.0}}},
+        {"STEAM.FWH.HDRAIN", {{"dca", 5.6}}},
+        {"STEAM.DEAERATOR.EXTRACTION", {{"p_da", 0.9}, {"m_drain", 10.0}, {"h_drain", 900.0}}},
+        {"STEAM.DEAERATOR.BALANCE", {{"p_da", 0.9}, {"m_drain", 10.0}, {"h_drain", 900.0}}},
+        {"STEAM.FWH.DRAINPUMP.BALANCE",
+         {{"p_fw", 2.0}, {"h_fw_mid", 680.0}, {"h_pumped", 652.0}, {"h_ext_up", 3100.0}, {"p_shell_up", 1.0},
+          {"dca_up", 5.6}, {"m_casc_up", 5.0}, {"h_casc_up", 800.0}, {"frac", 1.0}}},
     };
     return m;
 }

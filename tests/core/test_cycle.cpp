@@ -251,8 +251,9 @@ TEST(CycleCatalogue, UsUnitsAndRows) {
     ASSERT_EQ(t.cols, 8u);
     EXPECT_EQ(t.at(0, 0).text.substr(0, 6), "h_elep");
     EXPECT_NEAR(t.at(1, 0).number, 2379.3978752270345, 2e-6);  // python3-iapws 1.5.2 (Debian), as above
+    // DEAERATOR.BALANCE(m_fw; h_fw_in; p_da; h_ext; [m_drain; h_drain]).
     const Table d = call(fn("STEAM.DEAERATOR.BALANCE"),
-                         {num(0.9), num(560), num(600), num(3000), num(90), num(900)});
+                         {num(560), num(600), num(0.9), num(3000), num(90), num(900)});
     ASSERT_EQ(d.cols, 4u);
     EXPECT_NEAR(d.at(0, 2).number, 742.7246151273523, 1e-8);
     // An error names the input.
@@ -260,11 +261,16 @@ TEST(CycleCatalogue, UsUnitsAndRows) {
                                   {Value::of(16.7), Value::of(540.0), Value::of(4.1), Value::of(0.87), Value::of(30.0)});
     ASSERT_EQ(bad.kind, Value::Kind::Error);
     EXPECT_NE(bad.text.find("p_ext"), std::string::npos) << bad.text;
+    // DRAINPUMP.BALANCE(m_fw; h_fw_in; h_fw_mid; h_fw_out; p_fw; h_ext; h_drain; h_pumped; h_ext_up;
+    // p_shell_up; dca_up; [frac; m_casc_up; h_casc_up]) equals the core function.
     const Table pr = call(fn("STEAM.FWH.DRAINPUMP.BALANCE"),
-                          {num(420), num(2.0), num(330), num(460), num(610), num(2680), num(500), num(502),
-                           num(2860), num(0.45), num(5.6), num(0), num(0), num(1)});
+                          {num(420), num(330), num(460), num(610), num(2.0), num(2680), num(500), num(502),
+                           num(2860), num(0.45), num(5.6)});
     ASSERT_EQ(pr.cols, 7u);
-    EXPECT_EQ(pr.at(0, 0).kind, Value::Kind::Number);
+    const cy::DrainPump r = cy::pumped_drain(420, 2.0, 330, 460, 610, 2680, 500, 502, 2860, 0.45, 5.6, 0, 0, 1.0);
+    EXPECT_DOUBLE_EQ(pr.at(0, 0).number, r.m_ext_up);
+    EXPECT_DOUBLE_EQ(pr.at(0, 2).number, r.m_pumped);
+    EXPECT_DOUBLE_EQ(pr.at(0, 6).number, r.h_drain_up);
 }
 
 }  // namespace
