@@ -334,9 +334,30 @@ void add_heaters(std::vector<Function>& out) {
 }  // namespace
 
 void add_cycle_family(std::vector<Function>& out) {
+    const std::size_t first = out.size();
     add_line_points(out);
     add_wet_exhaust(out);
     add_heaters(out);
+    // Worked examples for docs/functions.md (SI; states of a 660 MW class reheat unit, common practice).
+    static const std::pair<const char*, const char*> examples[] = {
+        {"STEAM.TURBINE.HLINE.PT", "16.7; 540; 4.1; 0.87; 6.2"},
+        {"STEAM.TURBINE.LINEPOINT.PT", "16.7; 540; 4.1; 0.87; 6.2"},
+        {"STEAM.TURBINE.HLINE.PH", "0.931; 3140; 0.0065; 0.86; 0.16"},
+        {"STEAM.TURBINE.LINEPOINT.PH", "0.931; 3140; 0.0065; 0.86; 0.16"},
+        {"STEAM.TURBINE.ELEP.PT", "0.931; 340; 0.0065; 0.9; 1"},
+        {"STEAM.TURBINE.UEEP.PT", "0.931; 340; 0.0065; 0.9; 1; 30"},
+        {"STEAM.TURBINE.EXHAUST.PT", "0.931; 340; 0.0065; 0.9; 1; 30"},
+        {"STEAM.TURBINE.ELEP.PH", "0.931; 3140; 0.0065; 0.9; 1"},
+        {"STEAM.TURBINE.UEEP.PH", "0.931; 3140; 0.0065; 0.9; 1; 30"},
+        {"STEAM.TURBINE.EXHAUST.PH", "0.931; 3140; 0.0065; 0.9; 1; 30"},
+        {"STEAM.FWH.HDRAIN", "4; 209.4; 5.6"},
+        {"STEAM.DEAERATOR.EXTRACTION", "565; 580; 0.9; 3140; 90; 900"},
+        {"STEAM.DEAERATOR.BALANCE", "565; 580; 0.9; 3140; 90; 900"},
+        {"STEAM.FWH.DRAINPUMP.BALANCE", "480; 330; 460; 610; 2; 2680; 500; 502; 2860; 0.43; 5.6"},
+    };
+    for (std::size_t i = first; i < out.size(); ++i)
+        for (const auto& e : examples)
+            if (out[i].name == e.first) out[i].example = out[i].name + "(" + e.second + ")";
 }
 
 }  // namespace isentra::catalogue::detail
