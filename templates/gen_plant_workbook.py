@@ -537,7 +537,8 @@ def run_checks(c):
         (H_OK_RH, "Readings complete: reheat p and T (rows 15-18)", f"COUNT([.{c}15:.{c}18])=4"),
         (H_READY, "Ready for the heat rate (row 26; row 27 with reheat)",
          f"AND({r(H_OK_MAIN)};OR(NOT({r(H_RH)});{r(H_OK_RH)}))"),
-        (H_OK_NET, "Readings complete: aux. power, boiler eff. (rows 20-21)", f"COUNT([.{c}20:.{c}21])=2"),
+        (H_OK_NET, "Ready for the net heat rate (row 28; rows 20-21)",
+         f"AND({r(H_READY)};COUNT([.{c}20:.{c}21])=2)"),
     ]
 
 
@@ -569,9 +570,9 @@ def run_results(c):
         (40, "Turbine cycle efficiency (1 kWh / cycle heat rate)", "%", "result_pct", when(ready, f"{kwh}/{x['hr']}")),
         (41, "Net output (gross - auxiliary)", "MW", "result_2", when(f"COUNT({r(19)};{r(20)})=2", f"{r(19)}-{r(20)}")),
         (42, "Net unit heat rate (fuel heat per net kWh)", "hr", "result_1",
-         when(f"AND({ready};{net_ok})", heat_rate("HEATRATENET", r(20), r(21)))),
+         when(net_ok, heat_rate("HEATRATENET", r(20), r(21)))),
         (43, "Net unit efficiency (1 kWh / net unit heat rate)", "%", "result_pct",
-         when(f"AND({ready};{net_ok})", f"{kwh}/{x['hr_net']}")),
+         when(net_ok, f"{kwh}/{x['hr_net']}")),
     ]
 
 

@@ -329,13 +329,14 @@ def data_sheet():
         ch = col_name(ISO_COL0 + 2 * j + 1)
         centre = f"[.{SCOL[sec][k]}2]"
         pref = f"[$Test.{pcol}{FIRST_ROW}]"
+        done = f"[$Test.${OKCOL[sec]}${FIRST_ROW}]"  # T1's readings of that section complete
         put(1, cs, c_text(f"{name} s"))
         put(1, ch, c_formula(f'"{name} "&IF(ISNUMBER({pref});TEXT({pref};"General")&" "&{p_unit()};"isobar")', string=True))
         for n in range(ISO_N):
             r = 2 + n
             frac = round(lo + (hi - lo) * n / (ISO_N - 1), 6)
             put(r, cs, c_formula(f"{centre}*(1+({frac!r}))"))
-            put(r, ch, c_formula(f"IF(ISNUMBER([.{cs}{r}]);{ADDIN}HPS({pref};[.{cs}{r}];{UNITS});NA())"))
+            put(r, ch, c_formula(f"IF({done};{ADDIN}HPS({pref};[.{cs}{r}];{UNITS});NA())"))
     rows = grid_rows(grid, nrows, MARK_COL0 + 2 * POINTS - 1)
     return f'<table:table table:name="{DATA}" table:style-name="ta_hidden">' + "".join(rows) + "</table:table>"
 

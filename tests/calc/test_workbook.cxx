@@ -9,6 +9,7 @@
 #include <algorithm>
 #include <cmath>
 #include <cstdio>
+#include <regex>
 #include <string>
 #include <vector>
 
@@ -254,6 +255,53 @@ TEST_F(Workbook, ChartAxesAreFixedPerFileAndFrameTheDemoStates) {
         std::printf("  states: s %.3f..%.3f (%.0f %% of the axis), h %.1f..%.1f (%.0f %%)\n", s_lo, s_hi,
                     100 * (s_hi - s_lo) / (x.max - x.min), h_lo, h_hi, 100 * (h_hi - h_lo) / (y.max - y.min));
     }
+}
+
+// The rule of every template (DEVELOPERS.md "Templates"): a formula that calls
+// the add-in is =IF(<one "readings complete" cell>; call; "" or NA()), and no
+// formula nests AND/OR/LEN/TRIM/COUNT/ISNUMBER around a call. Calls on
+// constants only (STEAM.VERSION, the saturation line's grid, a unit
+// conversion of a constant) need no guard.
+TEST_F(Workbook, EveryAddInCallSitsBehindOneReadingsCompleteCell) {
+    const std::regex addin(R"(ORG\.ISENTRA\.STEAMFUNCTIONS\.([A-Z]+)\()", std::regex::icase);
+    const std::regex guarded(R"(^=IF\(\$?'?[A-Za-z ]*'?\.?\$?[A-Z]{1,2}\$?[0-9]+;)");
+    const std::regex nested(R"((^|[^A-Z.])(AND|OR|LEN|TRIM|COUNT|ISNUMBER)\()");
+    const char* files[] = {"harrow-fen-unit2-turbine-test.ods", "harrow-fen-unit2-turbine-test-us.ods",
+                           "isentra-turbine-section-test.ots", "isentra-turbine-section-test-us.ots",
+                           "harrow-fen-unit2-plant-performance.ods", "harrow-fen-unit2-plant-performance-us.ods",
+                           "isentra-plant-performance.ots", "isentra-plant-performance-us.ots"};
+    int calls = 0, guards = 0;
+    std::string example;
+    for (const char* file : files) {
+        SCOPED_TRACE(file);
+        open(file);
+        for (const std::string& sheet : wb_.sheet_names()) {
+            const auto rows = wb_.formulas(sheet, "A1:BD80");
+            for (std::size_t r = 0; r < rows.size(); ++r)
+                for (std::size_t c = 0; c < rows[r].size(); ++c) {
+                    const std::string& f = rows[r][c];
+                    std::smatch m;
+                    if (f.empty() || f[0] != '=' || !std::regex_search(f, m, addin)) continue;
+                    ++calls;
+                    const std::string where = sheet + " row " + std::to_string(r + 1) + " col " + std::to_string(c + 1);
+                    EXPECT_FALSE(std::regex_search(f, nested)) << where << ": " << f;
+                    if (std::regex_search(f, guarded)) {
+                        ++guards;
+                        if (example.empty() && f.find("FWHEXTRACTION") != std::string::npos) example = f;
+                        continue;
+                    }
+                    // Unguarded: only calls on constants.
+                    for (auto it = std::sregex_iterator(f.begin(), f.end(), addin); it != std::sregex_iterator(); ++it) {
+                        const std::string fn = (*it)[1];
+                        EXPECT_TRUE(fn == "VERSION" || fn == "SGT" || fn == "HGT" || fn == "CONVERT")
+                            << where << ": " << f;
+                    }
+                }
+        }
+    }
+    std::printf("%d add-in calls in 8 workbooks, %d behind a readings-complete cell; e.g. %s\n", calls, guards,
+                example.c_str());
+    EXPECT_GT(guards, 8 * 20);
 }
 
 TEST_F(Workbook, BlankTemplatesHaveNoResultsAndNoErrors) {

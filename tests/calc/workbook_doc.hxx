@@ -10,6 +10,7 @@
 
 #include <filesystem>
 #include <string>
+#include <vector>
 
 #include <com/sun/star/beans/PropertyValue.hpp>
 #include <com/sun/star/beans/XPropertySet.hpp>
@@ -21,6 +22,7 @@
 #include <com/sun/star/frame/XComponentLoader.hpp>
 #include <com/sun/star/lang/XMultiComponentFactory.hpp>
 #include <com/sun/star/sheet/XCalculatable.hpp>
+#include <com/sun/star/sheet/XCellRangeFormula.hpp>
 #include <com/sun/star/sheet/XSpreadsheet.hpp>
 #include <com/sun/star/sheet/XSpreadsheetDocument.hpp>
 #include <com/sun/star/sheet/XSpreadsheets.hpp>
@@ -99,6 +101,28 @@ public:
     std::string shown(const std::string& sheet_name, const std::string& a1) {
         css::uno::Reference<css::text::XTextRange> t(cell(sheet_name, a1), css::uno::UNO_QUERY_THROW);
         return ::rtl::OUStringToOString(t->getString(), RTL_TEXTENCODING_UTF8).getStr();
+    }
+
+    std::vector<std::string> sheet_names() {
+        css::uno::Reference<css::sheet::XSpreadsheetDocument> sd(doc_, css::uno::UNO_QUERY_THROW);
+        std::vector<std::string> out;
+        for (const auto& n : sd->getSheets()->getElementNames())
+            out.push_back(::rtl::OUStringToOString(n, RTL_TEXTENCODING_UTF8).getStr());
+        return out;
+    }
+    // The formulas (or constants) of a range, by rows, as the API writes them, in one call.
+    std::vector<std::vector<std::string>> formulas(const std::string& sheet_name, const std::string& range) {
+        using namespace css::uno;
+        Reference<css::table::XCellRange> r(sheet(sheet_name), UNO_QUERY_THROW);
+        Reference<css::sheet::XCellRangeFormula> f(
+            r->getCellRangeByName(::rtl::OUString::createFromAscii(range.c_str())), UNO_QUERY_THROW);
+        std::vector<std::vector<std::string>> out;
+        for (const auto& line : f->getFormulaArray()) {
+            out.emplace_back();
+            for (const auto& cell : line)
+                out.back().push_back(::rtl::OUStringToOString(cell, RTL_TEXTENCODING_UTF8).getStr());
+        }
+        return out;
     }
 
     // Axis 'x' or 'y' of the index-th chart on a sheet.
