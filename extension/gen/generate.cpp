@@ -401,8 +401,8 @@ std::string functions_md(const std::vector<cat::Function>& fs) {
       << "# Isentra function reference\n\n"
       << "Isentra " << cat::version() << " adds " << fs.size()
       << " functions to LibreOffice Calc, listed below by category with their arguments, the units of "
-         "each, what they accept and a worked example whose result Isentra itself computed when this "
-         "page was made. This page separates arguments with `;`; Calc may show another separator, "
+         "each, what they accept and a worked example (in SI units) whose result Isentra itself computed "
+         "when this page was made. This page separates arguments with `;`; Calc may show another separator, "
          "depending on Tools > Options > LibreOffice Calc > Formula. Arguments in [brackets] are "
          "optional; the others are required, and Calc refuses a call without them (Err:504).\n\n"
       << "Results feed decisions about pressure equipment: check them, and defer to the codes that apply "
