@@ -52,6 +52,7 @@ from odf_writer import (ADDIN, MIME_ODS, MIME_OTS, COMMON_STYLES, CELL_STYLES,  
                         content_xml, styles_xml, meta_xml, write_package,
                         chart_axis_style, chart_series_style, chart_stroke_dash, chart_object, chart_parts,
                         chart_frame_cell)
+import plant_flow_sheet  # noqa: E402  (the Flow sheet, ISO 5167 flow meters)
 
 UNITS = "[$Heaters.$B$5]"  # the one units cell, as every formula refers to it
 US = f'UPPER({UNITS})="US"'
@@ -643,6 +644,7 @@ def document(demo, system):
     auto = COMMON_STYLES + "  " + "\n  ".join(extra) + CELL_STYLES
     sheets = [("Heaters", heaters_sheet(demo, system)), ("Pumps", pumps_sheet(demo, system)),
               ("Heat rate", heat_rate_sheet(demo, system))]
+    sheets = plant_flow_sheet.add_flow_sheet(sys.modules[__name__], sheets, demo, system)  # + Flow, feeds Heat rate row 9
     xml, objects = "", []
     for name, sheet in sheets:
         sx = sheet.xml(name)
