@@ -674,6 +674,7 @@ int run_csv(const std::vector<std::string>& args) {
     double last_progress = t0;
     bool progress_shown = false;
     unsigned long long rows = 0;
+    unsigned long long long_rows = 0, first_long_row = 0;  // rows with more fields than the header
     for (;;) {
         const char* p = in.begin();
         const char* end = in.end();
@@ -693,6 +694,15 @@ int run_csv(const std::vector<std::string>& args) {
             }
             read_inputs(r, fields);
             w.put(std::string_view(p, static_cast<std::size_t>(content_end - p)));
+            // A short row gets empty fields up to the header's width, so the
+            // new columns stay under their names; a long one keeps its extra
+            // fields (its new columns then stand to the right of the header's)
+            // and is counted in the summary.
+            for (std::size_t k = fields.size(); k < r.header.size(); ++k) w.put(o.delimiter);
+            if (fields.size() > r.header.size()) {
+                if (long_rows == 0) first_long_row = rows + 1;
+                ++long_rows;
+            }
             for (Column& c : r.columns) {
                 const bool error = compute(r, c);
                 if (error) ++c.error_rows;
@@ -742,6 +752,11 @@ int run_csv(const std::vector<std::string>& args) {
         std::fprintf(stderr, "isentra csv: %s rows in %.3f s", with_thousands(rows).c_str(), elapsed);
         if (elapsed >= 0.05 && rows > 0) std::fprintf(stderr, " (%s rows/s)", with_thousands(static_cast<unsigned long long>(static_cast<double>(rows) / elapsed)).c_str());
         std::fputc('\n', stderr);
+        if (long_rows > 0)
+            std::fprintf(stderr,
+                         "isentra csv: %s rows have more fields than the header (the first: data row %s); "
+                         "their new columns stand to the right of the extra fields\n",
+                         with_thousands(long_rows).c_str(), with_thousands(first_long_row).c_str());
         for (const Column& c : r.columns) {
             if (c.error_rows == 0) std::fprintf(stderr, "isentra csv: %s: no errors\n", c.name.c_str());
             else

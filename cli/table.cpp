@@ -57,7 +57,7 @@ bool parse_grid(const std::string& what, const std::string& text, std::vector<do
             decimals = static_cast<int>(k - dot - 1);
         }
         if (t.find_first_of("eE") != std::string::npos) decimals = -1;  // no decimal stepping
-        return parse_number(t, '.', v);
+        return parse_number(t, '.', v) && std::isfinite(v);  // nan, inf: not a grid value
     };
     const std::size_t c1 = text.find(':');
     if (c1 == std::string::npos) {
@@ -68,7 +68,7 @@ bool parse_grid(const std::string& what, const std::string& text, std::vector<do
             double v;
             int d;
             if (!number(t, v, d)) {
-                err = what + ": '" + t + "' is not a number (a list is v1,v2,... and a range START:STOP:STEP)";
+                err = what + ": '" + t + "' is not a finite number (a list is v1,v2,... and a range START:STOP:STEP)";
                 return false;
             }
             out.push_back(v);
@@ -86,7 +86,7 @@ bool parse_grid(const std::string& what, const std::string& text, std::vector<do
     int d1, d2, d3;
     if (!number(text.substr(0, c1), start, d1) || !number(text.substr(c1 + 1, c2 - c1 - 1), stop, d2) ||
         !number(text.substr(c2 + 1), step, d3)) {
-        err = what + ": START, STOP and STEP must be numbers, e.g. 1:10:0.5, not '" + text + "'";
+        err = what + ": START, STOP and STEP must be finite numbers, e.g. 1:10:0.5, not '" + text + "'";
         return false;
     }
     if (!(step > 0)) {

@@ -357,11 +357,15 @@ TEST(CliCsv, ByteOrderMarkShortRowsQuietAndHeaderOnly) {
     EXPECT_EQ(r.err, "");  // --quiet: no summary
     ASSERT_EQ(r.lines.size(), 3u) << r.out;
     EXPECT_EQ(r.lines[0], "\xEF\xBB\xBFp,T,note,h");  // the mark stays, the name p is found
-    EXPECT_NE(split(r.lines[1]).back(), "");          // a short row: the missing note is not used
-    EXPECT_EQ(r.lines[2], "10,");                      // T missing: empty result
+    // A short row gets empty fields up to the header's width: h stays under "h".
+    ASSERT_EQ(split(r.lines[1]).size(), 4u) << r.lines[1];
+    EXPECT_EQ(r.lines[1].rfind("10,500,,", 0), 0u) << r.lines[1];
+    EXPECT_NE(split(r.lines[1])[3], "");
+    EXPECT_EQ(r.lines[2], "10,,,");  // T missing: empty result in the h column
     const Outcome e = run({"csv", "--no-progress", "--errors", in.path, "h=H.PT(p; T)"});
     ASSERT_EQ(e.lines.size(), 3u);
-    EXPECT_EQ(e.lines[2], "10,,the argument T is empty");
+    EXPECT_EQ(e.lines[2], "10,,,,the argument T is empty");
+    EXPECT_FALSE(contains(e.err, "more fields than the header")) << e.err;
     EXPECT_TRUE(contains(e.err, "h: 1 rows with errors")) << e.err;
     const Outcome h = run({"csv", "h=H.PT(p; T)"}, "p,T\n");
     EXPECT_EQ(h.status, 0);
@@ -388,6 +392,27 @@ TEST(CliCsv, RandomInputsNeverCrash) {
             EXPECT_EQ(r.out, "") << s;
         }
     }
+}
+
+// Ragged rows against the header: short ones are padded (also with ';' and
+// CRLF, and a quoted field holding the delimiter counts as one field); long
+// ones keep their extra fields and are counted on standard error.
+TEST(CliCsv, RaggedRowsKeepTheNewColumnsUnderTheirNames) {
+    const double hv = parse(line_mode({"H.PT(10; 500)"})[0]);
+    char buf[40];
+    const std::string h(buf, std::to_chars(buf, buf + sizeof buf, hv).ptr);  // the shortest form, as csv writes
+    const Outcome r = run({"csv", "--no-progress", "--errors", "h=H.PT(p; T)"},
+                          "p,T,tag,note\r\n10,500\r\n10,500,\"a,b\"\r\n10,500,x,y,z\r\n10,500,x,y,z\r\n");
+    EXPECT_EQ(r.status, 0);
+    EXPECT_EQ(r.out, "p,T,tag,note,h,h_error\r\n"
+                     "10,500,,," + h + ",\r\n"
+                     "10,500,\"a,b\",," + h + ",\r\n"
+                     "10,500,x,y,z," + h + ",\r\n"
+                     "10,500,x,y,z," + h + ",\r\n");
+    EXPECT_TRUE(contains(r.err, "2 rows have more fields than the header (the first: data row 3)")) << r.err;
+    const Outcome s = run({"csv", "-q", "--decimal", ",", "h=H.PT(p; T)"}, "p;T;note\n10;500\n");
+    EXPECT_EQ(s.out, "p;T;note;h\n10;500;;" + std::string(h).replace(h.find('.'), 1, ",") + "\n");
+    EXPECT_EQ(s.err, "");
 }
 
 TEST(CliCsv, InputOptionForAnyFileName) {

@@ -189,6 +189,14 @@ TEST(CliTable, TextLayoutErrorsAndOptions) {
     EXPECT_EQ(run({"table", "pT", "--p", "1:10:0", "--T", "300"}).status, 2);
     EXPECT_EQ(run({"table", "pT", "--p", "1", "--T", "300", "--props", "zz"}).status, 2);
     EXPECT_EQ(run({"table", "sat-T", "--T", "100", "--units", "furlongs"}).status, 2);
+    // nan and inf are no grid values: a usage error, never an empty table or a "nan" row.
+    for (const char* grid : {"nan:1:1", "1:nan:1", "1:2:inf", "0:inf:1", "nan", "inf", "100,nan", "-inf,1"}) {
+        const Outcome bad = run({"table", "sat-T", "--T", grid});
+        EXPECT_EQ(bad.status, 2) << grid << ": " << bad.out;
+        EXPECT_EQ(bad.out, "") << grid;
+        EXPECT_TRUE(contains(bad.err, "finite")) << grid << ": " << bad.err;
+    }
+    EXPECT_EQ(run({"table", "pT", "--p", "nan", "--T", "100"}).status, 2);
     const Outcome help = run({"table", "--help"});
     EXPECT_EQ(help.status, 0);
     EXPECT_TRUE(contains(help.out, "sat-T")) << help.out;
