@@ -264,7 +264,11 @@ int run_table(const std::vector<std::string>& args) {
     };
     auto add_function = [&](const std::string& display, const std::string& fname) -> bool {
         const cat::Function* f = cat::find(fname);
-        if (!f || f->kind != cat::ResultKind::Number) return false;
+        if (!f) return false;
+        if (f->kind != cat::ResultKind::Number) {
+            err = fname + " gives a row of values, not one per state; name its elements instead";
+            return false;
+        }
         Column c;
         c.name = display;
         c.unit = spec.symbol(f->result);
@@ -295,8 +299,8 @@ int run_table(const std::vector<std::string>& args) {
     for (const std::string& p : o.props) {
         err.clear();
         if (!add_function(p, "STEAM." + upper(p) + suffix)) {
-            return usage(mode, "--props: there is no function STEAM." + upper(p) + suffix +
-                                   (err.empty() ? std::string() : " (" + err + ")") +
+            return usage(mode, "--props: " +
+                                   (err.empty() ? "there is no function STEAM." + upper(p) + suffix : err) +
                                    (o.kind == Kind::PT ? "; properties are e.g. h, s, v, u, rho, cp, cv, w, mu, lambda"
                                                        : "; saturation properties are e.g. hf, hg, hfg, sf, sg, vf, vg"));
         }

@@ -197,6 +197,11 @@ TEST(CliTable, TextLayoutErrorsAndOptions) {
         EXPECT_TRUE(contains(bad.err, "finite")) << grid << ": " << bad.err;
     }
     EXPECT_EQ(run({"table", "pT", "--p", "nan", "--T", "100"}).status, 2);
+    // A row function is named as such, not as missing.
+    const Outcome row = run({"table", "pT", "--p", "1", "--T", "150", "--props", "statemv"});
+    EXPECT_EQ(row.status, 2);
+    EXPECT_TRUE(contains(row.err, "STEAM.STATEMV.PT gives a row of values")) << row.err;
+    EXPECT_FALSE(contains(row.err, "there is no function")) << row.err;
     const Outcome help = run({"table", "--help"});
     EXPECT_EQ(help.status, 0);
     EXPECT_TRUE(contains(help.out, "sat-T")) << help.out;
