@@ -457,8 +457,9 @@ def cycle_sheet(us, demo):
                             " by a licensed engineer. Isentra comes without any warranty.", "caution")]))
     rows.append(row([c_empty()]))
     rows.append(row([c_text("Units", "label"), c_text("US" if us else "SI", "input"),
-                     c_span("SI or US for the whole workbook. SI: MPa (absolute), °C, kJ/kg, kg/s, kJ/kWh.  US: psia, "
-                            "°F, Btu/lbm, lbm/h, Btu/kWh. Power in MW in both.", "note", 5)]))
+                     c_span("Units of the inputs and results, SI or US: the units the inputs are typed in and the "
+                            "results come out in (changing it converts nothing). SI: MPa (absolute), °C, kJ/kg, kg/s, "
+                            "kJ/kWh.  US: psia, °F, Btu/lbm, lbm/h, Btu/kWh. Power in MW in both.", "note", 5)]))
     rows.append(row([c_text("Case shown", "label"), c_num(1, "input"),
                      c_span("1 to 4: the case whose points (sheet Points) and charts (sheet Charts) are shown", "note",
                             5)]))
@@ -840,7 +841,7 @@ LOCAL_STYLES = """
 def content_xml(us, demo):
     auto = (COMMON_STYLES + LOCAL_STYLES + "  " + "\n  ".join([
         table_style("ta_show"), table_style("ta_hidden", visible=False),
-        column_style("coK", "1.6cm"), column_style("coD", "8.6cm"), column_style("coU", "2.1cm"),
+        column_style("coK", "1.6cm"), column_style("coD", "10.2cm"), column_style("coU", "2.1cm"),
         column_style("coV", "3.3cm"), column_style("coN", "1.0cm"), column_style("coC", "13.9cm")]) + CELL_STYLES)
     sheets = cycle_sheet(us, demo) + balance_sheet() + points_sheet() + charts_sheet(us) + data_sheet()
     return document_content(auto, sheets)
@@ -855,7 +856,9 @@ def write(path, mimetype, us, demo, title):
         hs = chart_object("h-s chart: expansion line, saturated vapour, section isobars", hs_series(),
                           "s, kJ/(kg·K)", "h, kJ/kg", 5.6, 2100)
         ts = chart_object("T-s diagram of the cycle", ts_series(), "s, kJ/(kg·K)", "T, °C", 0, 0)
-    parts = [("content.xml", content_xml(us, demo)), ("styles.xml", styles_xml()),
+    # The long sheets (inputs, balance) print one page wide and as many pages tall as they need.
+    styles = styles_xml().replace('style:scale-to-Y="1"', 'style:scale-to-Y="0"')
+    parts = [("content.xml", content_xml(us, demo)), ("styles.xml", styles),
              ("meta.xml", meta_xml(title, "gen_cycle_workbook.py"))]
     extra = []
     for obj, (c, s) in (("Object 1", hs), ("Object 2", ts)):
