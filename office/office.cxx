@@ -2,22 +2,25 @@
 #include "office.hxx"
 
 #include <cerrno>
-#include <cxxabi.h>
-#include <typeinfo>
 #include <chrono>
+#include <cstdio>
 #include <cstdlib>
 #include <cstring>
+#include <cxxabi.h>
 #include <filesystem>
 #include <fstream>
 #include <memory>
+#include <mutex>
+#include <signal.h>
 #include <sstream>
 #include <stdexcept>
 #include <thread>
+#include <typeinfo>
+#include <vector>
 
 #include <arpa/inet.h>
 #include <fcntl.h>
 #include <netinet/in.h>
-#include <signal.h>
 #include <sys/socket.h>
 #include <sys/stat.h>
 #include <sys/types.h>
@@ -26,29 +29,19 @@
 
 #include <com/sun/star/beans/PropertyValue.hpp>
 #include <com/sun/star/bridge/XUnoUrlResolver.hpp>
-#include <com/sun/star/container/XIndexAccess.hpp>
 #include <com/sun/star/frame/XComponentLoader.hpp>
 #include <com/sun/star/frame/XDesktop.hpp>
 #include <com/sun/star/lang/XMultiComponentFactory.hpp>
-#include <com/sun/star/sheet/XArrayFormulaRange.hpp>
-#include <com/sun/star/sheet/XCalculatable.hpp>
-#include <com/sun/star/sheet/XSpreadsheetDocument.hpp>
-#include <com/sun/star/sheet/XSpreadsheets.hpp>
-#include <com/sun/star/table/XCellRange.hpp>
-#include <com/sun/star/text/XTextRange.hpp>
 #include <com/sun/star/uno/Exception.hpp>
 #include <com/sun/star/util/XCloseable.hpp>
 #include <cppuhelper/bootstrap.hxx>
 #include <rtl/ustring.hxx>
 
 #ifndef ISENTRA_OXT_PATH
-#error "ISENTRA_OXT_PATH must name the built .oxt"
+#define ISENTRA_OXT_PATH ""
 #endif
 #ifndef ISENTRA_LO_PROGRAM_DIR
 #define ISENTRA_LO_PROGRAM_DIR "/usr/lib/libreoffice/program"
-#endif
-#ifndef ISENTRA_UNO_INI
-#error "ISENTRA_UNO_INI must name the client's UNO bootstrap file"
 #endif
 
 namespace isentra::office {
@@ -66,19 +59,9 @@ std::string str(const OUString& s) {
     return std::string(o.getStr(), static_cast<std::size_t>(o.getLength()));
 }
 
-std::string message(const css::uno::Exception& e) {
-    int status = 0;
-    char* name = abi::__cxa_demangle(typeid(e).name(), nullptr, nullptr, &status);
-    const std::string type = name ? name : typeid(e).name();
-    std::free(name);
-    return str(e.Message) + " (" + type + ")";
-}
-
 namespace {
 
 constexpr uid_t unprivileged_id = 65534;  // nobody / nogroup on Debian
-
-
 
 std::string read_file(const std::string& path, std::size_t max = 4000) {
     std::ifstream in(path, std::ios::binary);
@@ -109,7 +92,8 @@ int free_port() {
 }
 
 // Starts argv in a new process group (the child's pid is the group id),
-// stdout and stderr appended to `log`.
+// stdout and stderr appended to `log`. Only async-signal-safe calls after fork
+// (the client may have other threads).
 pid_t spawn(const std::vector<std::string>& argv, const std::string& log) {
     std::vector<char*> args;
     for (const std::string& a : argv) args.push_back(const_cast<char*>(a.c_str()));
@@ -133,15 +117,17 @@ pid_t spawn(const std::vector<std::string>& argv, const std::string& log) {
     return pid;
 }
 
-void kill_group(pid_t pgid) {
+void kill_group(pid_t pgid, int grace_ms) {
     if (pgid <= 0) return;
+    ::kill(-pgid, SIGCONT);  // a stopped office cannot exit cleanly
     ::kill(-pgid, SIGTERM);
-    for (int i = 0; i < 30; ++i) {  // up to 3 s for a clean exit
-        if (::kill(-pgid, 0) != 0) return;
+    for (int i = 0; i < grace_ms / 100; ++i) {
         ::waitpid(pgid, nullptr, WNOHANG);
+        if (::kill(-pgid, 0) != 0) return;
         std::this_thread::sleep_for(std::chrono::milliseconds(100));
     }
     ::kill(-pgid, SIGKILL);
+    ::waitpid(pgid, nullptr, 0);
 }
 
 // Runs argv to completion (in its own process group); returns the exit status.
@@ -154,10 +140,9 @@ int run(const std::vector<std::string>& argv, const std::string& log, int timeou
         if (r == pid) break;
         if (r < 0 && errno != EINTR) return -1;
         if (std::chrono::steady_clock::now() > deadline) {
-            kill_group(pid);
-            ::waitpid(pid, &status, 0);
-            throw std::runtime_error("timed out after " + std::to_string(timeout_s) + " s: " + argv[0] +
-                                     " ...\n" + read_file(log));
+            kill_group(pid, 0);
+            throw std::runtime_error("timed out after " + std::to_string(timeout_s) + " s: " + argv[0] + " ...\n" +
+                                     read_file(log));
         }
         std::this_thread::sleep_for(std::chrono::milliseconds(50));
     }
@@ -165,137 +150,195 @@ int run(const std::vector<std::string>& argv, const std::string& log, int timeou
     return WIFEXITED(status) ? WEXITSTATUS(status) : 128 + WTERMSIG(status);
 }
 
-// The local UNO runtime of this test process (created once).
-Reference<css::uno::XComponentContext> local_context() {
-    static const Reference<css::uno::XComponentContext> ctx =
-        cppu::defaultBootstrap_InitialComponentContext(ou(ISENTRA_UNO_INI));
+// The local UNO runtime of this process (created once): office types and
+// the URE services (bridge, connector, URL resolver), from a bootstrap file
+// written for the program folder.
+Reference<css::uno::XComponentContext> local_context(const std::string& program, const std::string& tmp) {
+    static std::mutex mutex;
+    static Reference<css::uno::XComponentContext> ctx;
+    std::lock_guard<std::mutex> lock(mutex);
+    if (ctx.is()) return ctx;
+    std::string ini = tmp + "/isentra-uno-XXXXXX";
+    const int fd = ::mkstemp(ini.data());
+    if (fd < 0) throw std::runtime_error("cannot create a UNO bootstrap file in " + tmp);
+    const std::string text = "[Bootstrap]\nURE_INTERNAL_LIB_DIR=file://" + program + "\nLO_LIB_DIR=file://" + program +
+                             "\nUNO_TYPES=file://" + program + "/types.rdb file://" + program +
+                             "/types/offapi.rdb\nUNO_SERVICES=file://" + program + "/services.rdb\n";
+    const bool ok = ::write(fd, text.data(), text.size()) == static_cast<ssize_t>(text.size());
+    ::close(fd);
+    if (!ok) throw std::runtime_error("cannot write " + ini);
+    try {
+        ctx = cppu::defaultBootstrap_InitialComponentContext(ou("file://" + ini));
+    } catch (...) {
+        ::unlink(ini.c_str());
+        throw;
+    }
+    ::unlink(ini.c_str());
     return ctx;
 }
 
-
-std::unique_ptr<Office>& instance() {
-    static std::unique_ptr<Office> office;
-    return office;
-}
-
-std::string& start_failure() {
-    static std::string failure;
-    return failure;
+void add_profile_items(const std::string& profile, const std::string& items) {
+    if (items.empty()) return;
+    const std::string path = profile + "/user/registrymodifications.xcu";
+    std::string xcu = read_file(path, std::string::npos);
+    const std::size_t end = xcu.rfind("</oor:items>");
+    if (end == std::string::npos) throw std::runtime_error("no registrymodifications.xcu in the new profile " + profile);
+    xcu.insert(end, items);
+    std::ofstream out(path, std::ios::binary | std::ios::trunc);
+    out << xcu;
+    if (!out) throw std::runtime_error("cannot write " + path);
 }
 
 }  // namespace
 
-Office& Office::get() {
-    auto& office = instance();
-    if (!office) {
-        if (!start_failure().empty()) throw std::runtime_error(start_failure());
-        try {
-            office.reset(new Office());
-        } catch (const std::exception& e) {
-            start_failure() = std::string("cannot start the headless office: ") + e.what();
-            throw std::runtime_error(start_failure());
-        } catch (const css::uno::Exception& e) {
-            start_failure() = "cannot start the headless office: " + message(e);
-            throw std::runtime_error(start_failure());
-        }
-    }
-    return *office;
+std::string message(const css::uno::Exception& e) {
+    int status = 0;
+    char* name = abi::__cxa_demangle(typeid(e).name(), nullptr, nullptr, &status);
+    const std::string type = name ? name : typeid(e).name();
+    std::free(name);
+    return str(e.Message) + " (" + type + ")";
 }
 
-void Office::shutdown() { instance().reset(); }
+Office::Office(Settings settings) : settings_(std::move(settings)) {
+    root_ = ::geteuid() == 0;
+    std::string tmp = settings_.tmp_parent;
+    if (tmp.empty() && std::getenv("ISENTRA_TEST_TMPDIR")) tmp = std::getenv("ISENTRA_TEST_TMPDIR");
+    if (tmp.empty() && std::getenv("TMPDIR")) tmp = std::getenv("TMPDIR");
+    if (tmp.empty()) tmp = "/tmp";
+    program_ = settings_.program_dir;
+    if (program_.empty() && std::getenv("ISENTRA_LO_PROGRAM")) program_ = std::getenv("ISENTRA_LO_PROGRAM");
+    if (program_.empty()) program_ = ISENTRA_LO_PROGRAM_DIR;
+    std::string oxt_source = settings_.oxt.empty() ? std::string(ISENTRA_OXT_PATH) : settings_.oxt;
 
-Office::Office() {
-    const bool root = ::geteuid() == 0;
-    const char* tmp = std::getenv("ISENTRA_TEST_TMPDIR");
-    if (!tmp || !*tmp) tmp = "/tmp";
-    std::string pattern = std::string(tmp) + "/isentra-calc-XXXXXX";
-    if (!::mkdtemp(pattern.data())) throw std::runtime_error("mkdtemp failed in " + std::string(tmp));
+    std::string pattern = tmp + "/" + settings_.prefix + "XXXXXX";
+    if (!::mkdtemp(pattern.data())) throw std::runtime_error("cannot make a directory in " + tmp + ": " + std::strerror(errno));
     dir_ = pattern;
-    ::chmod(dir_.c_str(), 0755);  // traversable by the unprivileged user
-    const std::string profile = dir_ + "/profile", home = dir_ + "/home", oxt = dir_ + "/isentra.oxt";
-    fs::create_directory(profile);
-    fs::create_directory(home);
-    std::error_code ec;
-    fs::copy_file(ISENTRA_OXT_PATH, oxt, ec);
-    if (ec) throw std::runtime_error(std::string("cannot copy ") + ISENTRA_OXT_PATH + ": " + ec.message() +
-                                     " (build the extension first)");
-    ::chmod(oxt.c_str(), 0644);
+    try {
+        ::chmod(dir_.c_str(), 0755);  // traversable by the unprivileged user
+        profile_ = dir_ + "/profile";
+        home_ = dir_ + "/home";
+        log_ = dir_ + "/office.log";
+        const std::string oxt = dir_ + "/isentra.oxt";
+        fs::create_directory(profile_);
+        fs::create_directory(home_);
+        fs::create_directory(dir_ + "/tmp");  // the office's TMPDIR: nothing of it outside dir_
+        if (!oxt_source.empty()) {
+            std::error_code ec;
+            fs::copy_file(oxt_source, oxt, ec);
+            if (ec) throw std::runtime_error("cannot copy the extension " + oxt_source + ": " + ec.message());
+            ::chmod(oxt.c_str(), 0644);
+        }
+        if (root_ && (::chown(profile_.c_str(), unprivileged_id, unprivileged_id) != 0 ||
+                      ::chown(home_.c_str(), unprivileged_id, unprivileged_id) != 0 ||
+                      ::chown((dir_ + "/tmp").c_str(), unprivileged_id, unprivileged_id) != 0))
+            throw std::runtime_error("cannot give the private profile to uid 65534");
 
-    std::vector<std::string> as_user;  // runs a command as the office's user, with a private HOME
-    if (root) {
-        if (::chown(profile.c_str(), unprivileged_id, unprivileged_id) != 0 ||
-            ::chown(home.c_str(), unprivileged_id, unprivileged_id) != 0)
-            throw std::runtime_error("cannot chown the test profile to uid 65534");
-        as_user = {"setpriv", "--reuid=" + std::to_string(unprivileged_id),
-                   "--regid=" + std::to_string(unprivileged_id), "--clear-groups"};
-    }
-    // -C: start in our own world-readable directory; the office's start script changes back
-    // to its working directory and fails if the unprivileged user cannot enter it (a clone
-    // under /root, mode 0700).
-    as_user.insert(as_user.end(), {"env", "-C", dir_, "HOME=" + home, "LANG=C.UTF-8", "LC_ALL=C.UTF-8"});
-    const std::string program = ISENTRA_LO_PROGRAM_DIR;
-    const std::string user_installation = "-env:UserInstallation=file://" + profile;
-    const std::string log = dir_ + "/office.log";
-
-    auto cmd = [&](std::vector<std::string> tail) {
-        std::vector<std::string> v = as_user;
-        v.insert(v.end(), tail.begin(), tail.end());
-        return v;
-    };
-
-    // 1. Initialise the profile. (An extension added to a profile that no
-    //    office has started yet is unregistered again by the first start.)
-    int rc = run(cmd({program + "/soffice", "--headless", "--norestore", "--nologo", "--terminate_after_init",
-                      user_installation}),
-                 log, 180);
-    if (rc != 0) throw std::runtime_error("soffice --terminate_after_init failed (" + std::to_string(rc) + "):\n" + read_file(log));
-    // 2. Install the extension (-s: accept the licence without asking).
-    rc = run(cmd({program + "/unopkg", "add", "-s", "-f", oxt, user_installation}), log, 180);
-    if (rc != 0) throw std::runtime_error("unopkg add failed (" + std::to_string(rc) + "):\n" + read_file(log));
-    // 3. The office, listening on a socket (a pipe is per user).
-    const int port = free_port();
-    pgid_ = spawn(cmd({program + "/soffice", "--headless", "--invisible", "--norestore", "--nologo", "--nodefault",
-                       "--nolockcheck", user_installation,
-                       "--accept=socket,host=127.0.0.1,port=" + std::to_string(port) +
-                           ";urp;StarOffice.ComponentContext"}),
-                  log);
-
-    // 4. Watchdog: if this process dies without shutdown(), kill the office
-    //    and remove the directory. It waits for EOF on a pipe; a byte means
-    //    "orderly shutdown, nothing to do".
-    int fds[2];
-    if (::pipe2(fds, O_CLOEXEC) == 0) {
-        const pid_t w = ::fork();
-        if (w == 0) {
-            ::setsid();  // survive a kill of this process's group
-            ::close(fds[1]);
-            char c;
-            ssize_t n;
-            while ((n = ::read(fds[0], &c, 1)) < 0 && errno == EINTR) {
+        // Watchdog: if this process dies without stop(), kill the office and
+        // remove the directory. Messages on a pipe: 'p' + pid (the office's
+        // current process group), 'x' (orderly shutdown); EOF means the client died.
+        int fds[2];
+        if (::pipe2(fds, O_CLOEXEC) == 0) {
+            const std::string dir = dir_;
+            const pid_t w = ::fork();
+            if (w == 0) {
+                ::setsid();  // survive a kill of the client's group
+                ::close(fds[1]);
+                pid_t office = -1;
+                while (true) {
+                    char c;
+                    ssize_t n = ::read(fds[0], &c, 1);
+                    if (n < 0 && errno == EINTR) continue;
+                    if (n == 1 && c == 'x') std::_Exit(0);
+                    if (n == 1 && c == 'p') {
+                        pid_t p;
+                        std::size_t got = 0;
+                        while (got < sizeof p) {
+                            const ssize_t k = ::read(fds[0], reinterpret_cast<char*>(&p) + got, sizeof p - got);
+                            if (k <= 0) break;
+                            got += static_cast<std::size_t>(k);
+                        }
+                        if (got == sizeof p) office = p;
+                        continue;
+                    }
+                    break;  // EOF or error: the client is gone
+                }
+                if (office > 0) {
+                    ::kill(-office, SIGCONT);
+                    ::kill(-office, SIGKILL);
+                }
+                ::sleep(1);
+                ::execlp("rm", "rm", "-rf", dir.c_str(), static_cast<char*>(nullptr));
+                std::_Exit(0);
             }
-            if (n == 1) std::_Exit(0);
-            ::kill(-pgid_, SIGKILL);
-            ::sleep(1);
-            ::execlp("rm", "rm", "-rf", dir_.c_str(), static_cast<char*>(nullptr));
-            std::_Exit(0);
+            ::close(fds[0]);
+            if (w > 0) {
+                watchdog_pid_ = w;
+                watchdog_fd_ = fds[1];
+            } else {
+                ::close(fds[1]);
+            }
         }
-        ::close(fds[0]);
-        if (w > 0) {
-            watchdog_pid_ = w;
-            watchdog_fd_ = fds[1];
-        } else {
-            ::close(fds[1]);
-        }
-    }
 
-    // 5. Connect, with retries while the office starts.
-    const Reference<css::uno::XComponentContext> local = local_context();
+        auto cmd = [&](std::vector<std::string> tail) {
+            std::vector<std::string> v;
+            if (root_)
+                v = {"setpriv", "--reuid=" + std::to_string(unprivileged_id), "--regid=" + std::to_string(unprivileged_id),
+                     "--clear-groups"};
+            // -C: the office's start script changes back to its working directory and fails if
+            // the unprivileged user cannot enter it (a clone under /root, mode 0700).
+            v.insert(v.end(), {"env", "-C", dir_, "HOME=" + home_, "TMPDIR=" + dir_ + "/tmp", "LANG=C.UTF-8", "LC_ALL=C.UTF-8"});
+            v.insert(v.end(), tail.begin(), tail.end());
+            return v;
+        };
+        const std::string user_installation = "-env:UserInstallation=file://" + profile_;
+        // 1. Initialise the profile.
+        int rc = run(cmd({program_ + "/soffice", "--headless", "--norestore", "--nologo", "--terminate_after_init",
+                          user_installation}),
+                     log_, 180);
+        if (rc != 0)
+            throw std::runtime_error("soffice --terminate_after_init failed (" + std::to_string(rc) + "):\n" + log_tail());
+        // 2. The extension (-s: accept the licence without asking).
+        if (!oxt_source.empty()) {
+            rc = run(cmd({program_ + "/unopkg", "add", "-s", "-f", oxt, user_installation}), log_, 180);
+            if (rc != 0) throw std::runtime_error("unopkg add failed (" + std::to_string(rc) + "):\n" + log_tail());
+        }
+        // 3. Configuration.
+        add_profile_items(profile_, settings_.profile_items);
+        local_context(program_, tmp);
+        start();
+    } catch (...) {
+        stop();
+        throw;
+    }
+}
+
+void Office::start() {
+    const std::string user_installation = "-env:UserInstallation=file://" + profile_;
+    std::vector<std::string> v;
+    if (root_)
+        v = {"setpriv", "--reuid=" + std::to_string(unprivileged_id), "--regid=" + std::to_string(unprivileged_id),
+             "--clear-groups"};
+    const int port = free_port();
+    v.insert(v.end(), {"env", "-C", dir_, "HOME=" + home_, "TMPDIR=" + dir_ + "/tmp", "LANG=C.UTF-8", "LC_ALL=C.UTF-8",
+                       program_ + "/soffice",
+                       "--headless", "--invisible", "--norestore", "--nologo", "--nodefault", "--nolockcheck",
+                       user_installation,
+                       "--accept=socket,host=127.0.0.1,port=" + std::to_string(port) + ";urp;StarOffice.ComponentContext"});
+    pgid_ = spawn(v, log_);
+    if (watchdog_fd_ >= 0) {
+        char msg[1 + sizeof(pid_t)];
+        msg[0] = 'p';
+        const pid_t p = pgid_;
+        std::memcpy(msg + 1, &p, sizeof p);
+        (void)!::write(watchdog_fd_, msg, sizeof msg);
+    }
+    // Connect, with retries while the office starts.
+    const Reference<css::uno::XComponentContext> local = local_context(program_, "/tmp");
     Reference<css::bridge::XUnoUrlResolver> resolver(
         local->getServiceManager()->createInstanceWithContext("com.sun.star.bridge.UnoUrlResolver", local),
         UNO_QUERY_THROW);
-    const OUString url = ou("uno:socket,host=127.0.0.1,port=" + std::to_string(port) +
-                            ";urp;StarOffice.ComponentContext");
-    const auto deadline = std::chrono::steady_clock::now() + std::chrono::seconds(120);
+    const OUString url = ou("uno:socket,host=127.0.0.1,port=" + std::to_string(port) + ";urp;StarOffice.ComponentContext");
+    const auto deadline = std::chrono::steady_clock::now() + std::chrono::seconds(settings_.start_timeout_s);
     std::string last_error;
     while (!remote_.is()) {
         try {
@@ -312,16 +355,82 @@ Office::Office() {
         int status = 0;
         if (::waitpid(pgid_, &status, WNOHANG) == pgid_) {
             pgid_ = -1;
-            throw std::runtime_error("soffice exited before accepting a connection:\n" + read_file(log));
+            throw std::runtime_error("soffice exited before accepting a connection:\n" + log_tail());
         }
         if (std::chrono::steady_clock::now() > deadline)
-            throw std::runtime_error("no connection to soffice on port " + std::to_string(port) +
-                                     " within 120 s (" + last_error + "):\n" + read_file(log));
-        std::this_thread::sleep_for(std::chrono::milliseconds(200));
+            throw std::runtime_error("no connection to soffice on port " + std::to_string(port) + " within " +
+                                     std::to_string(settings_.start_timeout_s) + " s (" + last_error + "):\n" + log_tail());
+        std::this_thread::sleep_for(std::chrono::milliseconds(100));
     }
 }
 
 Office::~Office() { stop(); }
+
+namespace {
+
+std::unique_ptr<Office>& shared() {
+    static std::unique_ptr<Office> office;
+    return office;
+}
+
+std::string& shared_failure() {
+    static std::string failure;
+    return failure;
+}
+
+}  // namespace
+
+Office& Office::get() {
+    auto& office = shared();
+    if (!office) {
+        if (!shared_failure().empty()) throw std::runtime_error(shared_failure());
+        try {
+            Settings s;
+            s.prefix = "isentra-calc-";
+            office = std::make_unique<Office>(s);
+        } catch (const std::exception& e) {
+            shared_failure() = std::string("cannot start the headless office: ") + e.what();
+            throw std::runtime_error(shared_failure());
+        } catch (const css::uno::Exception& e) {
+            shared_failure() = "cannot start the headless office: " + message(e);
+            throw std::runtime_error(shared_failure());
+        }
+    }
+    return *office;
+}
+
+void Office::shutdown() { shared().reset(); }
+
+void Office::signal(int sig) {
+    const int p = pgid_;
+    if (p > 0) ::kill(-p, sig);
+}
+
+bool Office::alive() {
+    if (pgid_ <= 0) return false;
+    int status = 0;
+    const pid_t r = ::waitpid(pgid_, &status, WNOHANG);
+    if (r == pgid_) {
+        ::kill(-pgid_, SIGKILL);  // what is left of the group
+        pgid_ = -1;
+        return false;
+    }
+    return r == 0;
+}
+
+void Office::restart() {
+    try {
+        remote_.clear();
+    } catch (...) {
+    }
+    if (pgid_ > 0) {
+        kill_group(pgid_, 0);
+        pgid_ = -1;
+    }
+    start();
+}
+
+std::string Office::log_tail() const { return read_file(log_); }
 
 void Office::stop() {
     if (remote_.is()) {
@@ -341,8 +450,7 @@ void Office::stop() {
     if (pgid_ > 0) {
         for (int i = 0; i < 50 && ::waitpid(pgid_, nullptr, WNOHANG) == 0; ++i)
             std::this_thread::sleep_for(std::chrono::milliseconds(100));
-        kill_group(pgid_);
-        ::waitpid(pgid_, nullptr, WNOHANG);
+        kill_group(pgid_, 3000);
         pgid_ = -1;
     }
     if (watchdog_fd_ >= 0) {
@@ -364,13 +472,11 @@ void Office::stop() {
 
 Reference<css::lang::XComponent> Office::new_calc_document() {
     Reference<css::frame::XComponentLoader> loader(
-        remote_->getServiceManager()->createInstanceWithContext("com.sun.star.frame.Desktop", remote_),
-        UNO_QUERY_THROW);
+        remote_->getServiceManager()->createInstanceWithContext("com.sun.star.frame.Desktop", remote_), UNO_QUERY_THROW);
     css::uno::Sequence<css::beans::PropertyValue> props(1);
     props[0].Name = "Hidden";
     props[0].Value <<= true;
-    Reference<css::lang::XComponent> doc =
-        loader->loadComponentFromURL("private:factory/scalc", "_blank", 0, props);
+    Reference<css::lang::XComponent> doc = loader->loadComponentFromURL("private:factory/scalc", "_blank", 0, props);
     if (!doc.is()) throw std::runtime_error("the office did not create a Calc document");
     return doc;
 }

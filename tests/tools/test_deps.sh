@@ -25,7 +25,7 @@ exit 0
 SH
 printf '#!/bin/sh\nexec "$@"\n' >"$T/sudo"  # as a normal user: no real sudo either
 chmod +x "$T/dpkg-query" "$T/apt-get" "$T/sudo"
-all="cmake g++ make libboost-dev libgtest-dev libbenchmark-dev libreoffice-dev python3 python3-uno zip poppler-utils util-linux locales python3-iapws"
+all="cmake g++ make libboost-dev libgtest-dev libbenchmark-dev libreoffice-dev python3 python3-uno zip poppler-utils util-linux locales python3-iapws zlib1g-dev libexpat1-dev"
 run() { STUB=$T PATH="$T:$PATH" bash "$ROOT/tools/deps" >"$T/out" 2>&1; echo $?; }
 
 # 1. The desktop Calc is installed, one build package is missing: the
