@@ -608,7 +608,8 @@ def points_sheet():
     rows.append(row([c_text("Case", "label"),
                      c_formula(f"IF(ISNUMBER({SEL});MAX(1;MIN(4;INT({SEL})));1)", "result"),
                      c_formula(f"INDEX([$Balance.$D${BAL_NAME}:$G${BAL_NAME}];1;[.$B$3])", "result", True)]))
-    rows.append(row([c_text("Complete", "label"), c_formula(f"INDEX([$Balance.$D${BAL_OK}:$G${BAL_OK}];1;[.$B$3])", "result")]))
+    rows.append(row([c_text("Complete", "label"), c_formula(f"INDEX([$Balance.$D${BAL_OK}:$G${BAL_OK}];1;[.$B$3])", "result"),
+                     c_text("1 (TRUE): the case's inputs are complete; otherwise the table stays blank")]))
     rows.append(row([c_empty()]))
     assert len(rows) + 1 == PT_HEAD
     rows.append(row([c_text("No.", "head"), c_text("Point", "head"), c_text("p", "head"), c_text("T", "head"),
@@ -842,7 +843,7 @@ def content_xml(us, demo):
     auto = (COMMON_STYLES + LOCAL_STYLES + "  " + "\n  ".join([
         table_style("ta_show"), table_style("ta_hidden", visible=False),
         column_style("coK", "1.6cm"), column_style("coD", "10.2cm"), column_style("coU", "2.1cm"),
-        column_style("coV", "3.3cm"), column_style("coN", "1.0cm"), column_style("coC", "13.9cm")]) + CELL_STYLES)
+        column_style("coV", "3.3cm"), column_style("coN", "2.0cm"), column_style("coC", "13.9cm")]) + CELL_STYLES)
     sheets = cycle_sheet(us, demo) + balance_sheet() + points_sheet() + charts_sheet(us) + data_sheet()
     return document_content(auto, sheets)
 
