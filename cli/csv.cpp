@@ -266,7 +266,9 @@ int parse_options(const std::vector<std::string>& args, Options& o) {
             o.units_given = true;
         } else if (a == "--column-unit") {
             if (!need(v)) return usage(mode, "--column-unit needs COLUMN=UNIT, e.g. --column-unit p_ms=barg");
-            const std::size_t eq = v.find('=');
+            // COLUMN may be written in square brackets, as in a call (then it may hold '=').
+            const std::size_t close = v.compare(0, 1, "[") == 0 ? v.find(']') : 0;
+            const std::size_t eq = close == std::string::npos ? close : v.find('=', close);
             if (eq == std::string::npos || eq == 0 || eq + 1 >= v.size())
                 return usage(mode, "--column-unit needs COLUMN=UNIT, e.g. --column-unit p_ms=barg, not '" + v + "'");
             o.column_units.emplace_back(trim(v.substr(0, eq)), trim(v.substr(eq + 1)));
@@ -420,7 +422,9 @@ int plan(Run& r) {
     }
     // Units of single input columns.
     for (const auto& [name, unit] : o.column_units) {
-        const std::size_t k = find_input(r, name);
+        std::size_t k = find_input(r, name);
+        if (k == npos && name.size() > 2 && name.front() == '[' && name.back() == ']')
+            k = find_input(r, trim(name.substr(1, name.size() - 2)));  // [HP steam pressure]
         if (k == npos) return usage(mode, "--column-unit: there is no column '" + name + "' in the input (columns: " +
                                               column_list(r) + ")");
         units::UnitSpec spec;

@@ -415,6 +415,30 @@ TEST(CliCsv, RaggedRowsKeepTheNewColumnsUnderTheirNames) {
     EXPECT_EQ(s.err, "");
 }
 
+// --column-unit takes a column name as the header has it or in square
+// brackets, as a call writes it (also with '=' inside the brackets).
+TEST(CliCsv, ColumnUnitNamesInSquareBrackets) {
+    const std::string in = "HP steam pressure,HP T,a=b\n1450,950,1\n";
+    const Outcome plain = run({"csv", "-q", "--column-unit", "HP steam pressure=psia", "--column-unit", "HP T=degF",
+                               "h=H.PT([HP steam pressure]; [HP T])"},
+                              in);
+    const Outcome brackets = run({"csv", "-q", "--column-unit", "[HP steam pressure]=psia", "--column-unit",
+                                  "[HP T]=degF", "h=H.PT([HP steam pressure]; [HP T])"},
+                                 in);
+    EXPECT_EQ(plain.status, 0) << plain.err;
+    EXPECT_EQ(brackets.status, 0) << brackets.err;
+    EXPECT_EQ(brackets.out, plain.out);
+    ASSERT_EQ(plain.lines.size(), 2u);
+    // The same state in US units, converted: H.PT(1450 psia; 950 degF) in Btu/lbm times 2.326 (exact).
+    const double us = parse(line_mode({"H.PT(1450; 950; \"US\")"})[0]);
+    EXPECT_NEAR(parse(split(plain.lines[1]).back()), us * 2.326, 1e-9 * us * 2.326);
+    const Outcome eq = run({"csv", "-q", "--column-unit", "[a=b]=kPa", "t=TSAT([a=b])"}, in);
+    EXPECT_EQ(eq.status, 0) << eq.err;
+    ASSERT_EQ(eq.lines.size(), 2u);
+    EXPECT_EQ(parse(split(eq.lines[1]).back()), parse(line_mode({"TSAT(1; \"KPA\")"})[0]));
+    EXPECT_EQ(run({"csv", "-q", "--column-unit", "[nothere]=kPa", "t=TSAT([a=b])"}, in).status, 2);
+}
+
 TEST(CliCsv, InputOptionForAnyFileName) {
     const TempFile dir_probe;  // a unique prefix
     const std::string odd = dir_probe.path + "_h=H.PT(p).csv";
