@@ -348,7 +348,7 @@ void add_calibrated(std::vector<Function>& out) {
         return m;
     };
     out.push_back(make("STEAM.FLOW.CALIBRATED", "flowCalibrated",
-                       "Mass flow through a calibrated meter from its differential pressure and calibration." +
+                       "Mass flow from dp; use it instead of the ISO 5167 coefficient when the meter has a calibration." +
                            std::string(" With the calibration's discharge coefficient: q_m = C/sqrt(1 - beta^4) eps "
                                        "(pi/4) d^2 sqrt(2 dp rho), solved by iteration in Re_D.") +
                            when + props_text,
@@ -357,7 +357,7 @@ void add_calibrated(std::vector<Function>& out) {
                            o[0] = fl::flow_from_dp(meter(a, x, 5), a[0], a[1], a[2]).m;
                        }));
     out.push_back(make("STEAM.FLOW.DP.CALIBRATED", "flowDpCalibrated",
-                       "Differential pressure of a calibrated meter at a given mass flow." +
+                       "Differential pressure at a given flow; use it when the meter has its own calibration." +
                            std::string(" The inverse of STEAM.FLOW.CALIBRATED.") + when,
                        cat({m_arg(), p_arg(), T_arg(), d_arg(), D_arg(), C, kind}, expansion_args()),
                        Quantity::DifferentialPressure,
@@ -373,7 +373,7 @@ void add_calibrated(std::vector<Function>& out) {
                                put_solution(fl::flow_from_dp(meter(a, x, 5), a[0], a[1], a[2]), o);
                            }));
     out.push_back(make("STEAM.FLOW.UNC.CALIBRATED", "flowUncCalibrated",
-                       "Uncertainty of the mass flow through a calibrated meter." +
+                       "Uncertainty of the mass flow through a meter with its own calibration." +
                            std::string(" In mass-flow units, with the calibration's uncertainty of C.") + when +
                            budget_text,
                        cat(cat({dp_arg(), p_arg(), T_arg(), d_arg(), D_arg(), C, kind, u_C}, uncertainty_args()),
