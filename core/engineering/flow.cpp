@@ -4,7 +4,10 @@
 // pressure (iterated in the Reynolds number), the inverse, and the
 // uncertainty of the flow. See flow.hpp for the conventions.
 //
-// Equations (ISO 5167, 2003 editions; the numbers below are the standards'):
+// Equations (ISO 5167, 2003 editions; the numbers below are the standards'; the
+// equation and clause numbers quoted here and in flow.hpp are from memory of
+// those editions, the equations themselves are checked against python3-fluids
+// and by hand in tests/core/test_flow.cpp):
 //   q_m   = C / sqrt(1 - beta^4) eps (pi/4) d^2 sqrt(2 dp rho1)      5167-1 Eq. 1
 //   Re_D  = 4 q_m / (pi mu1 D)                                        5167-1 3.3.2.1
 //   orifice C (Reader-Harris/Gallagher), 5167-2 Eq. 4:

@@ -486,6 +486,12 @@ TEST(FlowUnits, UsUnitsGiveTheSameFlow) {
     ASSERT_EQ(us.kind, Value::Kind::Number) << error_of(us);
     // 1 lbm = 0.45359237 kg (1959), 1 h = 3600 s
     EXPECT_LE(rel(us.number * 0.45359237 / 3600, si.number), 1e-13);
+    // The inverse in US units: dp in inH2O at 60 degF (248.84 Pa, NIST SP 811 B.8) for a flow in lbm/h.
+    const Value dp_us = call1("STEAM.FLOW.DP.ORIFICE", {scalar(us.number), scalar(p_psia), scalar(T_F), scalar(d_in),
+                                                        scalar(D_in), text("flange"), scalar(0), scalar(0),
+                                                        scalar(68), text("US")});
+    ASSERT_EQ(dp_us.kind, Value::Kind::Number) << error_of(dp_us);
+    EXPECT_LE(rel(dp_us.number * 248.84, 25000), 1e-10);
     // t/h and klb/h
     const Value th = call1("STEAM.FLOW.ORIFICE", {scalar(25), scalar(10), scalar(200), scalar(120), scalar(250),
                                                   text("flange"), scalar(0), scalar(0), scalar(20), text("SI m=t/h")});
