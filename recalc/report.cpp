@@ -79,7 +79,8 @@ std::string summary_line(const FileResult& r) {
 Table summary_table(const std::vector<FileResult>& results) {
     Table t{"Summary",
             {"file", "case", "status", "formula cells", "changes", "values changed", "new errors", "errors gone",
-             "unknown functions", "types changed", "recalculated copy", "note", "seconds"},
+             "unknown functions", "types changed", "recalculated copy", "note", "seconds",
+             "recalculation seconds"},
             {}};
     std::size_t files = 0, failed = 0, changed = 0;
     for (const FileResult& r : results) {
@@ -92,7 +93,8 @@ Table summary_table(const std::vector<FileResult>& results) {
                           number(static_cast<double>(r.formula_cells)), number(static_cast<double>(n.total())),
                           number(static_cast<double>(n.value)), number(static_cast<double>(n.new_error)),
                           number(static_cast<double>(n.error_gone)), number(static_cast<double>(n.unknown_name)),
-                          number(static_cast<double>(n.type_changed)), text(r.copy), text(r.note), number(r.seconds)});
+                          number(static_cast<double>(n.type_changed)), text(r.copy), text(r.note), number(r.seconds),
+                          number(r.recalc_seconds)});
     }
     t.rows.push_back({});
     t.rows.push_back({text("total"), Value{},

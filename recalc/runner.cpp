@@ -180,7 +180,9 @@ FileResult run_one(Worker& w, const Job& job, const Options& options, std::uniqu
                           "so their stored results are unknown and not compared";
         }
         for (const Assignment& a : job.sets) set_cell(doc, a);
+        const auto c0 = Clock::now();
         recalculate_all(doc);
+        r.recalc_seconds = std::chrono::duration<double>(Clock::now() - c0).count();
         const Snapshot after = read_snapshot(doc);
         if (!names) names = std::make_unique<FunctionNames>(office.context());
         r.changes = compare(before, after, options.tolerance, names.get());
