@@ -175,42 +175,57 @@ std::string to_ods(const std::vector<Table>& tables) {
         "xmlns:fo=\"urn:oasis:names:tc:opendocument:xmlns:xsl-fo-compatible:1.0\" "
         "xmlns:meta=\"urn:oasis:names:tc:opendocument:xmlns:meta:1.0\" "
         "xmlns:manifest=\"urn:oasis:names:tc:opendocument:xmlns:manifest:1.0\" office:version=\"1.3\"";
-    std::string c = "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n<office:document-content " + ns +
-                    "><office:automatic-styles>"
-                    "<style:style style:name=\"head\" style:family=\"table-cell\">"
-                    "<style:text-properties fo:font-weight=\"bold\"/></style:style>"
-                    "<style:style style:name=\"wide\" style:family=\"table-column\">"
-                    "<style:table-column-properties style:column-width=\"3.2cm\"/></style:style>"
-                    "</office:automatic-styles><office:body><office:spreadsheet>";
-    for (const Table& t : tables) {
+    // Column widths from the longest text in each column (about 0.2 cm a character).
+    std::string styles, body;
+    for (std::size_t ti = 0; ti < tables.size(); ++ti) {
+        const Table& t = tables[ti];
         std::size_t ncol = t.header.size();
         for (const auto& r : t.rows) ncol = std::max(ncol, r.size());
-        c += "<table:table table:name=\"" + xml_escape(t.name) + "\">";
-        c += "<table:table-column table:style-name=\"wide\" table:number-columns-repeated=\"" +
-             std::to_string(std::max<std::size_t>(ncol, 1)) + "\"/>";
-        c += "<table:table-row>";
+        std::vector<std::size_t> longest(ncol, 4);
+        for (std::size_t c = 0; c < t.header.size(); ++c) longest[c] = std::max(longest[c], t.header[c].size());
+        for (const auto& r : t.rows)
+            for (std::size_t c = 0; c < r.size(); ++c)
+                if (!(t.name == "Summary" && c == 2 && r.size() == 3))  // the total line's sentence may overflow
+                    longest[c] = std::max(longest[c], to_string(r[c]).size());
+        body += "<table:table table:name=\"" + xml_escape(t.name) + "\">";
+        for (std::size_t c = 0; c < ncol; ++c) {
+            const std::string name = "co" + std::to_string(ti) + "_" + std::to_string(c);
+            const double cm = std::min(14.0, std::max(1.8, 0.2 * static_cast<double>(longest[c]) + 0.4));
+            char w[32];
+            std::snprintf(w, sizeof w, "%.1fcm", cm);
+            styles += "<style:style style:name=\"" + name + "\" style:family=\"table-column\">"
+                      "<style:table-column-properties style:column-width=\"" + std::string(w) + "\"/></style:style>";
+            body += "<table:table-column table:style-name=\"" + name + "\"/>";
+        }
+        if (ncol == 0) body += "<table:table-column/>";
+        body += "<table:table-row>";
         for (const std::string& h : t.header)
-            c += "<table:table-cell table:style-name=\"head\" office:value-type=\"string\"><text:p>" + xml_escape(h) +
+            body += "<table:table-cell table:style-name=\"head\" office:value-type=\"string\"><text:p>" + xml_escape(h) +
                  "</text:p></table:table-cell>";
-        if (t.header.empty()) c += "<table:table-cell/>";
-        c += "</table:table-row>";
+        if (t.header.empty()) body += "<table:table-cell/>";
+        body += "</table:table-row>";
         for (const auto& r : t.rows) {
-            c += "<table:table-row>";
+            body += "<table:table-row>";
             for (const Value& v : r) {
                 if (v.kind == Value::Number && std::isfinite(v.number))
-                    c += "<table:table-cell office:value-type=\"float\" office:value=\"" + format_number(v.number) +
+                    body += "<table:table-cell office:value-type=\"float\" office:value=\"" + format_number(v.number) +
                          "\"><text:p>" + format_number(v.number) + "</text:p></table:table-cell>";
-                else if (v.kind == Value::Empty) c += "<table:table-cell/>";
+                else if (v.kind == Value::Empty) body += "<table:table-cell/>";
                 else
-                    c += "<table:table-cell office:value-type=\"string\"><text:p>" + xml_escape(to_string(v)) +
+                    body += "<table:table-cell office:value-type=\"string\"><text:p>" + xml_escape(to_string(v)) +
                          "</text:p></table:table-cell>";
             }
-            if (r.empty()) c += "<table:table-cell/>";
-            c += "</table:table-row>";
+            if (r.empty()) body += "<table:table-cell/>";
+            body += "</table:table-row>";
         }
-        c += "</table:table>";
+        body += "</table:table>";
     }
-    c += "</office:spreadsheet></office:body></office:document-content>\n";
+    const std::string content = "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n<office:document-content " + ns +
+                                "><office:automatic-styles>"
+                                "<style:style style:name=\"head\" style:family=\"table-cell\">"
+                                "<style:text-properties fo:font-weight=\"bold\"/></style:style>" +
+                                styles + "</office:automatic-styles><office:body><office:spreadsheet>" + body +
+                                "</office:spreadsheet></office:body></office:document-content>\n";
     const std::string manifest =
         "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n"
         "<manifest:manifest xmlns:manifest=\"urn:oasis:names:tc:opendocument:xmlns:manifest:1.0\" "
@@ -226,7 +241,7 @@ std::string to_ods(const std::vector<Table>& tables) {
     return zip_stored({{"mimetype", "application/vnd.oasis.opendocument.spreadsheet"},
                        {"META-INF/manifest.xml", manifest},
                        {"meta.xml", meta},
-                       {"content.xml", c}});
+                       {"content.xml", content}});
 }
 
 std::string zip_stored(const std::vector<std::pair<std::string, std::string>>& entries) {
