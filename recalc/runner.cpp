@@ -74,11 +74,24 @@ struct Worker {
     std::string start_error;
 };
 
+// The extension to install: $ISENTRA_OXT, else the one installed beside the
+// program (<prefix>/share/isentra/isentra.oxt), else the build's (the harness default).
+std::string extension_package() {
+    if (const char* oxt = std::getenv("ISENTRA_OXT"); oxt && *oxt) return oxt;
+    std::error_code ec;
+    const fs::path exe = fs::read_symlink("/proc/self/exe", ec);
+    if (!ec) {
+        const fs::path installed = exe.parent_path().parent_path() / "share" / "isentra" / "isentra.oxt";
+        if (fs::exists(installed, ec)) return installed.string();
+    }
+    return "";
+}
+
 office::Settings settings_for(int index) {
     office::Settings s;
     s.prefix = "isentra-recalc-" + std::to_string(index) + "-";
     s.profile_items = profile_items;
-    if (const char* oxt = std::getenv("ISENTRA_OXT")) s.oxt = oxt;
+    s.oxt = extension_package();
     return s;
 }
 
