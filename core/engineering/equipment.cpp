@@ -201,7 +201,7 @@ const Names out_names{"p_out", "T_out", "h_out", "s_in (isentropic end point at 
 
 // A section inlet read as (p,T): superheated or supercritical steam.
 State section_inlet_pT(double p_in, double T_in) {
-    return steam_pT(p_in, T_in, in_pT, "inlet", "give the inlet enthalpy and use STEAM.TURBINE.EFF.PH.PH instead");
+    return steam_pT(p_in, T_in, in_pT, "inlet", "give the inlet enthalpy (STEAM.HG.P(p_in) for saturated steam) and use STEAM.TURBINE.EFF.PH.PH instead");
 }
 
 // Inlet and outlet of a section read as (p,T) at both ends: steam at both, a
@@ -246,7 +246,8 @@ double efficiency(const State& in, double p_out, double h_out) {
 }
 
 const char* const to_ph_expansion =
-    "for wet steam give the inlet enthalpy and use the (p,h) form, e.g. STEAM.TURBINE.HOUT.PH";
+    "for wet or saturated steam give the inlet enthalpy (STEAM.HG.P(p_in) for saturated steam) and use the (p,h) "
+    "form, e.g. STEAM.TURBINE.HOUT.PH";
 
 
 }  // namespace
@@ -478,7 +479,18 @@ Throttling throttle(double p_in, double h, double p_out) {
 }  // namespace
 
 Throttling valve_pT(double p_in, double T_in, double p_out) {
-    const State in = pT(p_in, T_in, Names{"p_in", "T_in", "h_in", "s_in"});
+    State in;
+    try {
+        in = pT(p_in, T_in, Names{"p_in", "T_in", "h_in", "s_in"});
+    } catch (const RangeError&) {
+        throw;
+    } catch (const Error& e) {
+        if (e.code() != ErrorCode::Impossible) throw;
+        throw Error(ErrorCode::Impossible,
+                    "p_in and T_in lie exactly on the saturation line (T_in = Tsat(p_in)), where they do not fix the "
+                    "inlet state: use the (p,h) form, e.g. STEAM.VALVE.TOUT.PH, with h_in = STEAM.HF.P(p_in) for "
+                    "saturated water or STEAM.HG.P(p_in) for saturated steam");
+    }
     return throttle(p_in, in.h, p_out);
 }
 

@@ -4,9 +4,12 @@
 #include "isentra/surface/call.hpp"
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
+#include <cstdint>
 #include <cstdio>
 #include <exception>
+#include <utility>
 
 #include "isentra/units/units.hpp"
 
@@ -33,10 +36,20 @@ Value error_value(const Error& e, const units::UnitSpec& spec) { return Value::o
 
 bool is_scalar(const Table& t) { return t.rows == 1 && t.cols == 1; }
 
+// What a text argument holds, for its sentences.
+std::string text_kind(const std::string& argname) {
+    if (argname == "units") return "a unit system such as \"SI\" or \"US\"";
+    if (argname == "from" || argname == "to") return "a unit such as \"psig\" or \"kJ/kg\"";
+    if (argname == "function") return "a function name such as \"H.PT\"";
+    return "a text";
+}
+
 // Text of a 1x1 text argument ("" when empty or absent).
 bool text_arg(const Table& t, const std::string& argname, std::string& out, Value& err) {
     if (!is_scalar(t)) {
-        err = Value::of_error(ErrorCode::InvalidArgument, "the argument " + argname + " must be a single text, not a range");
+        err = Value::of_error(ErrorCode::InvalidArgument,
+                              "the argument " + argname + " must be a single text (" + text_kind(argname) +
+                                  "), not a range");
         return false;
     }
     const Value& v = t.cells[0];
@@ -46,7 +59,7 @@ bool text_arg(const Table& t, const std::string& argname, std::string& out, Valu
     else if (v.kind == Value::Kind::Error) { err = v; return false; }
     else {
         err = Value::of_error(ErrorCode::InvalidArgument,
-                              "the argument " + argname + " must be a text such as \"SI\" or \"US\", not the number " +
+                              "the argument " + argname + " must be " + text_kind(argname) + ", not the number " +
                                   fmt(v.number));
         return false;
     }
@@ -54,6 +67,41 @@ bool text_arg(const Table& t, const std::string& argname, std::string& out, Valu
 }
 
 Table error_table(Value v) { return Table::scalar(std::move(v)); }
+
+// The header flag of Row functions: TRUE or FALSE (Calc passes them as 1 and
+// 0), 1 or 0, or blank (false). Anything else is refused with a sentence.
+bool header_flag(const Table& t, bool& header, Value& err) {
+    const std::string rule = "header must be TRUE or FALSE (or 1 or 0, or left blank)";
+    if (!is_scalar(t)) {
+        err = Value::of_error(ErrorCode::InvalidArgument, rule + ", a single value, not a range");
+        return false;
+    }
+    const Value& v = t.cells[0];
+    switch (v.kind) {
+    case Value::Kind::Empty: header = false; return true;
+    case Value::Kind::Error: err = v; return false;
+    case Value::Kind::Text:
+        err = Value::of_error(ErrorCode::InvalidArgument, rule + ", not the text \"" + v.text + "\"");
+        return false;
+    case Value::Kind::Number:
+        if (v.number == 0.0 || v.number == 1.0) {
+            header = v.number == 1.0;
+            return true;
+        }
+        err = Value::of_error(ErrorCode::InvalidArgument, rule + ", not the number " + fmt(v.number));
+        return false;
+    }
+    return false;
+}
+
+// "(... reason)" + "a blank cell counts as 0" -> "(... reason; a blank cell counts as 0)".
+std::string with_blank_hint(std::string m) {
+    if (!m.empty() && m.back() == ')') {
+        m.pop_back();
+        return m + "; a blank cell counts as 0)";
+    }
+    return m + " (a blank cell counts as 0)";
+}
 
 Table call_convert(const Function&, const std::vector<Table>& args) {
     std::string from, to;
@@ -106,15 +154,100 @@ Table call_convert(const Function&, const std::vector<Table>& args) {
     return out;
 }
 
+// STEAM.UNITS.SPELL: what a units text means, quantity by quantity.
+Table call_units_spell(const std::vector<Table>& args) {
+    std::string text;
+    Value err;
+    if (!args.empty() && !text_arg(args[0], "units", text, err)) return error_table(err);
+    units::UnitSpec spec;
+    try {
+        spec = units::UnitSpec::parse(text);
+    } catch (const Error& e) {
+        return error_table(Value::of_error(e.code(), e.what()));
+    }
+    std::string out = (text.empty() ? std::string("An empty units text") : "\"" + text + "\"") + " means " +
+                      spec.name() + ":";
+    bool first = true;
+    for (int qi = static_cast<int>(Quantity::Pressure); qi <= static_cast<int>(Quantity::HeatRate); ++qi) {
+        const Quantity q = static_cast<Quantity>(qi);
+        out += first ? " " : "; ";
+        first = false;
+        out += std::string(units::quantity_name(q)) + " " + spec.symbol(q);
+        if (q == Quantity::Pressure && spec.is_gauge(q)) {
+            // The gauge unit's absolute counterpart: psig -> psi, barg -> bar, kPag -> kPa, MPag -> MPa.
+            std::string abs = spec.symbol(q);
+            if (!abs.empty() && abs.back() == 'g') abs.pop_back();
+            if (abs == "psi") abs = "psia";
+            out += " (gauge: absolute = reading + barometric pressure " +
+                   fmt(spec.from_core(q, spec.patm_MPa()) - spec.from_core(q, 0.0)) + " " + abs + " = " +
+                   fmt(spec.patm_MPa()) + " MPa)";
+        }
+    }
+    out += ". Inputs are read and results given in these units.";
+    return Table::scalar(Value::of_text(out));
+}
+
+// Edit distance (Levenshtein) between two upper-case names, for suggestions.
+std::size_t edit_distance(const std::string& a, const std::string& b) {
+    std::vector<std::size_t> row(b.size() + 1);
+    for (std::size_t j = 0; j <= b.size(); ++j) row[j] = j;
+    for (std::size_t i = 1; i <= a.size(); ++i) {
+        std::size_t diag = row[0];
+        row[0] = i;
+        for (std::size_t j = 1; j <= b.size(); ++j) {
+            const std::size_t up = row[j];
+            row[j] = std::min({row[j] + 1, row[j - 1] + 1, diag + (a[i - 1] == b[j - 1] ? 0 : 1)});
+            diag = up;
+        }
+    }
+    return row[b.size()];
+}
+
+std::string upper_short(std::string n) {
+    for (auto& c : n) c = static_cast<char>(std::toupper(static_cast<unsigned char>(c)));
+    while (!n.empty() && n.front() == ' ') n.erase(n.begin());
+    while (!n.empty() && n.back() == ' ') n.pop_back();
+    if (n.rfind("STEAM.", 0) == 0) n.erase(0, 6);
+    return n;
+}
+
+// The (up to) three catalogue names closest to `name`, as "STEAM.H.PT, STEAM.H.PH or STEAM.H.PS".
+std::string closest_names(const std::string& name) {
+    const std::string n = upper_short(name);
+    std::vector<std::pair<std::size_t, const std::string*>> d;
+    for (const Function& f : catalogue::functions()) {
+        if (f.name == "STEAM.EXPLAIN") continue;
+        d.emplace_back(edit_distance(n, upper_short(f.name)), &f.name);
+    }
+    std::stable_sort(d.begin(), d.end(), [](const auto& x, const auto& y) { return x.first < y.first; });
+    std::string out;
+    const std::size_t k = std::min<std::size_t>(3, d.size());
+    for (std::size_t i = 0; i < k; ++i) {
+        if (i > 0) out += i + 1 == k ? " or " : ", ";
+        out += *d[i].second;
+    }
+    return out;
+}
+
+// STEAM.EXPLAIN answers with a sentence, also about its own arguments: its
+// errors are texts too, never error values.
+Table explain_text(std::string sentence) { return Table::scalar(Value::of_text(std::move(sentence))); }
+
 Table call_explain(const std::vector<Table>& args) {
     std::string name;
     Value err;
-    if (args.empty()) return error_table(Value::of_error(ErrorCode::InvalidArgument, "name the function to explain"));
-    if (!text_arg(args[0], "function", name, err)) return error_table(err);
+    if (args.empty())
+        return explain_text("name the function to explain as the first argument, e.g. STEAM.EXPLAIN(\"H.PT\"; A2; B2)");
+    if (!text_arg(args[0], "function", name, err)) return explain_text(err.text);
+    if (name.empty())
+        return explain_text("the argument function is empty: name the function to explain, e.g. \"H.PT\" or "
+                            "\"STEAM.H.PT\"");
     const Function* target = catalogue::find(name);
-    if (!target || target->name == "STEAM.EXPLAIN")
-        return error_table(Value::of_error(ErrorCode::InvalidArgument,
-                                           "there is no function \"" + name + "\"; write it as in \"H.PT\" or \"STEAM.H.PT\""));
+    if (target && target->name == "STEAM.EXPLAIN")
+        return explain_text("STEAM.EXPLAIN explains a call of another function: name that one, e.g. \"H.PT\"");
+    if (!target)
+        return explain_text("there is no function \"" + name + "\"; the closest names are " + closest_names(name) +
+                            " (write a name as in \"H.PT\" or \"STEAM.H.PT\")");
     std::vector<Table> rest(args.begin() + 1, args.end());
     Table r = call(*target, rest);
     for (Value& v : r.cells) {
@@ -130,14 +263,25 @@ Table call_explain(const std::vector<Table>& args) {
 enum class ArgStatus { Ok, Skip, Failed };
 // v: the argument's value for this state; scalar_arg: the argument is a
 // single value (not a range); ranged: the call is broadcast over ranges.
+// The argument's range (catalogue metadata) is checked here, in one place:
+// a refused value gives the range sentence in the user's units, with "a
+// blank cell counts as 0" where the cell held 0. zero: set when the cell held
+// the number 0 (perhaps a blank cell), for evaluate_state's sentences.
 ArgStatus state_arg(const catalogue::Arg& arg, const Value& v, bool scalar_arg, bool ranged,
-                    const units::UnitSpec& spec, double& out, Value& err) {
+                    const units::UnitSpec& spec, double& out, Value& err, bool& zero) {
+    zero = false;
     if (v.kind == Value::Kind::Number) {
         if (!std::isfinite(v.number)) {
             err = Value::of_error(ErrorCode::InvalidArgument, arg.name + " is not a finite number");
             return ArgStatus::Failed;
         }
         out = spec.to_core(arg.quantity, v.number);
+        zero = v.number == 0.0;
+        if (!catalogue::arg_accepts(arg, out)) {
+            const std::string m = units::range_sentence(catalogue::range_error(arg, out), spec);
+            err = Value::of_error(ErrorCode::OutOfRange, zero ? with_blank_hint(m) : m);
+            return ArgStatus::Failed;
+        }
         return ArgStatus::Ok;
     }
     if (v.kind == Value::Kind::Empty) {
@@ -175,9 +319,12 @@ void evaluate_raw(const Function& f, const units::UnitSpec& spec, const catalogu
 
 // Evaluates f on one state (a: numeric arguments in core units) and gives
 // each result element to put(c, Value). Shared by call() and PreparedCall.
+// zero_mask: bit j set when numeric argument j (the arguments other than
+// texts, whole ranges and the header, in order) was given as 0: a range error on it then
+// says that a blank cell counts as 0.
 template <class Put>
 void evaluate_state(const Function& f, const units::UnitSpec& spec, const catalogue::Extra& extra, const double* a,
-                    Put&& put) {
+                    Put&& put, std::uint32_t zero_mask) {
     double res[32];
     const std::size_t width = result_width(f);
     try {
@@ -191,7 +338,18 @@ void evaluate_state(const Function& f, const units::UnitSpec& spec, const catalo
                 put(c, Value::of(spec.from_core(result_quantity_of(f, c), v)));
         }
     } catch (const Error& e) {
-        const Value ev = error_value(e, spec);
+        Value ev = error_value(e, spec);
+        if (const auto* re = dynamic_cast<const RangeError*>(&e)) {
+            std::size_t j = 0;
+            for (const catalogue::Arg& arg : f.args) {
+                if (arg.quantity == Quantity::Text || arg.whole_range || arg.name == "header") continue;
+                if (j < 32 && (zero_mask >> j & 1u) && arg.name == re->input()) {
+                    ev.text = with_blank_hint(ev.text);
+                    break;
+                }
+                ++j;
+            }
+        }
         for (std::size_t c = 0; c < width; ++c) put(c, ev);
     }
 }
@@ -284,6 +442,7 @@ Table call(const Function& f, const std::vector<Table>& args) {
         Value err;
         if (!check_count(f, args.size(), err)) return error_table(err);
         if (f.name == "STEAM.CONVERT") return call_convert(f, args);
+        if (f.name == "STEAM.UNITS.SPELL") return call_units_spell(args);
 
         // Units.
         units::UnitSpec spec;
@@ -301,10 +460,7 @@ Table call(const Function& f, const std::vector<Table>& args) {
                 continue;
             }
             if (f.args[i].name == "header") {
-                const Table& t = args[i];
-                if (!is_scalar(t)) return error_table(Value::of_error(ErrorCode::InvalidArgument, "header must be a single value"));
-                const Value& v = t.cells[0];
-                header = v.kind == Value::Kind::Number && v.number != 0.0;
+                if (!header_flag(args[i], header, err)) return error_table(err);
                 continue;
             }
             numeric.push_back(i);
@@ -354,6 +510,7 @@ Table call(const Function& f, const std::vector<Table>& args) {
             Value result;
             bool empty = false;
             bool failed = false;
+            std::uint32_t zero_mask = 0;
             for (std::size_t j = 0; j < numeric.size(); ++j) {
                 const std::size_t i = numeric[j];
                 const catalogue::Arg& spec_arg = f.args[i];
@@ -363,7 +520,9 @@ Table call(const Function& f, const std::vector<Table>& args) {
                 }
                 const Table& t = args[i];
                 const Value& v = is_scalar(t) ? t.cells[0] : t.cells[k];
-                const ArgStatus st = state_arg(spec_arg, v, is_scalar(t), ranged, spec, a[j], result);
+                bool zero = false;
+                const ArgStatus st = state_arg(spec_arg, v, is_scalar(t), ranged, spec, a[j], result, zero);
+                if (zero) zero_mask |= std::uint32_t(1) << j;
                 if (st == ArgStatus::Skip) empty = true;
                 if (st == ArgStatus::Failed) failed = true;
                 if (st != ArgStatus::Ok) break;
@@ -377,7 +536,7 @@ Table call(const Function& f, const std::vector<Table>& args) {
                 for (std::size_t c = 0; c < width; ++c) put(c, result);
                 continue;
             }
-            evaluate_state(f, spec, extra, a, put);
+            evaluate_state(f, spec, extra, a, put, zero_mask);
         }
         return out;
     } catch (const Error& e) {
@@ -428,9 +587,9 @@ PreparedCall::PreparedCall(const Function& f, const std::vector<Table>& args, co
         }
         if (arg.name == "header") {
             if (i >= args.size()) continue;
-            if (!is_scalar(args[i])) fail_text("header must be a single value");
-            const Value& v = args[i].cells[0];
-            if (v.kind == Value::Kind::Number && v.number != 0.0)
+            bool header = false;
+            if (!header_flag(args[i], header, err)) fail(err);
+            if (header)
                 fail_text("the header option of " + f.name + " is not available here: give it as FALSE or leave it out");
             continue;
         }
@@ -447,7 +606,9 @@ PreparedCall::PreparedCall(const Function& f, const std::vector<Table>& args, co
             }
         if (per_state) continue;
         if (!is_scalar(args[i])) fail_text("the argument " + arg.name + " must be a single value here, not a range");
-        if (state_arg(arg, args[i].cells[0], true, false, spec_, a_[pos], err) != ArgStatus::Ok) fail(err);
+        bool zero = false;
+        if (state_arg(arg, args[i].cells[0], true, false, spec_, a_[pos], err, zero) != ArgStatus::Ok) fail(err);
+        if (zero && pos < 32) zero_mask_ |= std::uint32_t(1) << pos;
     }
     if (a_.size() > 16 || width_ > 32) fail_text("internal error: " + f.name + " has too many arguments or results");
 }
@@ -468,6 +629,7 @@ bool PreparedCall::eval(const double* in, double* out) const noexcept {
             if (!std::isfinite(in[k])) return false;
             const Slot& s = slots_[k];
             a[s.pos] = (s.own_units ? s.spec : spec_).to_core(s.arg->quantity, in[k]);
+            if (!catalogue::arg_accepts(*s.arg, a[s.pos])) return false;  // eval(Value*) gives the sentence
         }
         evaluate_raw(*f_, spec_, extra_, a, res);
         for (std::size_t c = 0; c < width_; ++c) {
@@ -484,15 +646,19 @@ void PreparedCall::eval(const Value* in, Value* out) const {
     double a[16];
     std::copy(a_.begin(), a_.end(), a);
     Value err;
+    std::uint32_t zero_mask = zero_mask_;
     for (std::size_t k : order_) {
         const Slot& s = slots_[k];
-        if (state_arg(*s.arg, in[k], true, false, s.own_units ? s.spec : spec_, a[s.pos], err) != ArgStatus::Ok) {
+        bool zero = false;
+        if (state_arg(*s.arg, in[k], true, false, s.own_units ? s.spec : spec_, a[s.pos], err, zero) !=
+            ArgStatus::Ok) {
             for (std::size_t c = 0; c < width_; ++c) out[c] = err;
             return;
         }
+        if (zero && s.pos < 32) zero_mask |= std::uint32_t(1) << s.pos;
     }
     try {
-        evaluate_state(*f_, spec_, extra_, a, [&](std::size_t c, Value v) { out[c] = std::move(v); });
+        evaluate_state(*f_, spec_, extra_, a, [&](std::size_t c, Value v) { out[c] = std::move(v); }, zero_mask);
     } catch (const std::exception& e) {
         for (std::size_t c = 0; c < width_; ++c)
             out[c] = Value::of_error(ErrorCode::InvalidArgument, std::string("internal error: ") + e.what());

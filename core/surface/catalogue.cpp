@@ -9,7 +9,9 @@
 #include <algorithm>
 #include <cctype>
 #include <cmath>
+#include <cstdio>
 #include <limits>
+#include <utility>
 
 #include "isentra/base/error.hpp"
 #include "isentra/properties/state.hpp"
@@ -33,14 +35,23 @@ struct InputSpec {
     const char* arg;   // argument name shown to the user
     Quantity q;
     const char* description;
+    Range (*range)();
 };
 
-const InputSpec in_p{"P", "p", Quantity::Pressure, "Pressure (absolute unless a gauge unit is chosen)"};
-const InputSpec in_T{"T", "T", Quantity::Temperature, "Temperature"};
-const InputSpec in_h{"H", "h", Quantity::SpecificEnergy, "Specific enthalpy"};
-const InputSpec in_s{"S", "s", Quantity::SpecificEntropy, "Specific entropy"};
+const InputSpec in_p{"P", "p", Quantity::Pressure, "Pressure (absolute unless a gauge unit is chosen)",
+                     &detail::ranges::absolute_pressure};
+const InputSpec in_T{"T", "T", Quantity::Temperature, "Temperature", &detail::ranges::temperature};
+const InputSpec in_h{"H", "h", Quantity::SpecificEnergy, "Specific enthalpy", &detail::ranges::enthalpy};
+const InputSpec in_s{"S", "s", Quantity::SpecificEntropy, "Specific entropy", &detail::ranges::entropy};
+const InputSpec in_p_sat{"P", "p", Quantity::Pressure, "Saturation pressure (absolute unless a gauge unit is chosen)",
+                         &detail::ranges::saturation_pressure};
+const InputSpec in_T_sat{"T", "T", Quantity::Temperature, "Saturation temperature",
+                         &detail::ranges::saturation_temperature};
 const InputSpec in_x{"X", "x", Quantity::None,
-                     "Vapour quality (mass fraction of vapour), 0 = saturated liquid, 1 = saturated vapour"};
+                     "Vapour quality (mass fraction of vapour), 0 = saturated liquid, 1 = saturated vapour",
+                     &detail::ranges::quality};
+
+Arg input_arg(const InputSpec& in) { return detail::ranged(Arg{in.arg, in.q, in.description}, in.range()); }
 
 struct PairSpec {
     const char* code;  // "PT"
@@ -55,8 +66,8 @@ const PairSpec pairs[] = {
     {"PH", &in_p, &in_h, &state_ph, "pressure and specific enthalpy"},
     {"PS", &in_p, &in_s, &state_ps, "pressure and specific entropy"},
     {"HS", &in_h, &in_s, &state_hs, "specific enthalpy and specific entropy"},
-    {"PX", &in_p, &in_x, &state_px, "pressure and vapour quality"},
-    {"TX", &in_T, &in_x, &state_Tx, "temperature and vapour quality"},
+    {"PX", &in_p_sat, &in_x, &state_px, "pressure and vapour quality"},
+    {"TX", &in_T_sat, &in_x, &state_Tx, "temperature and vapour quality"},
 };
 
 // ---- Properties ------------------------------------------------------------
@@ -95,18 +106,64 @@ const PropSpec props[] = {
     {Prop::PR, "PR", "pr", Quantity::None, "Prandtl number (mu cp/lambda)", true},
 };
 
-[[noreturn]] void not_in_dome(const char* what) {
-    throw Error(ErrorCode::NotDefined,
-                std::string(what) +
-                    " is not defined for a wet (two-phase) state; use the saturated-liquid (F) or "
-                    "saturated-vapour (G) function, e.g. STEAM.CPF.P or STEAM.CPG.P");
+// The property's saturated-liquid and -vapour functions, as a sentence's way
+// out: "STEAM.CVF.P(p) for saturated water or STEAM.CVG.P(p) for saturated
+// steam" where the saturation family has them, else the PX form at x = 0 or 1.
+bool has_saturation_functions(Prop p) {
+    switch (p) {
+    case Prop::H: case Prop::S: case Prop::U: case Prop::V: case Prop::RHO: case Prop::CP: case Prop::CV:
+    case Prop::W: case Prop::MU: case Prop::LAMBDA: case Prop::NU: case Prop::PR: return true;
+    default: return false;
+    }
 }
 
-double single_phase(const State& st, double value, const char* what) {
-    if (st.phase == Phase::TwoPhase && !(st.x == 0.0 || st.x == 1.0)) not_in_dome(what);
-    if (critical_singularity(st.T, st.p, st.drhodp_T) || !std::isfinite(value))
+const char* prop_code(Prop p);
+
+std::string saturated_ways(Prop p) {
+    const std::string c = prop_code(p);
+    if (has_saturation_functions(p))
+        return "STEAM." + c + "F.P(p) for saturated water or STEAM." + c + "G.P(p) for saturated steam (or the .T forms)";
+    return "STEAM." + c + ".PX(p; 0) for saturated water or STEAM." + c + ".PX(p; 1) for saturated steam";
+}
+
+[[noreturn]] void not_in_dome(Prop p, const char* what) {
+    throw Error(ErrorCode::NotDefined, std::string(what) +
+                                           " is not defined for a wet (two-phase) state, only for each phase: use " +
+                                           saturated_ways(p));
+}
+
+// cp, cv, w, kappa and the transport properties need (d rho/d p)_T. At
+// pressures far below any plant's (below about 1e-150 MPa) the specific
+// volume is so large that its derivatives overflow double precision: that is
+// not the critical point, and the sentence says so.
+[[noreturn]] void too_low_pressure(const State& st, const std::string& subject) {
+    char buf[40];
+    std::snprintf(buf, sizeof buf, "%.6g", st.p);
+    throw Error(ErrorCode::OutOfRange,
+                subject + " not computable at p = " + buf +
+                    " MPa: at so low a pressure the specific volume is so large that its derivatives overflow "
+                    "double precision; steam there is an ideal gas, so the value at 1e-6 MPa is the same to many "
+                    "digits");
+}
+
+bool near_critical(const State& st) { return std::fabs(st.p - if97::pc) < 1.0 && std::fabs(st.T - if97::Tc) < 10.0; }
+
+double single_phase(const State& st, double value, Prop p, const char* what) {
+    if (st.phase == Phase::TwoPhase && !(st.x == 0.0 || st.x == 1.0)) not_in_dome(p, what);
+    if (critical_singularity(st.T, st.p, st.drhodp_T) || !std::isfinite(value)) {
+        if (!near_critical(st)) too_low_pressure(st, std::string(what) + " is");
         throw critical_singularity_error(std::string(what) + " is");
+    }
     return value;
+}
+
+// Transport properties: the same low-pressure case.
+template <class F>
+double transport(const State& st, F fn) {
+    if (!near_critical(st) && (critical_singularity(st.T, st.p, st.drhodp_T) || !std::isfinite(st.cp)) &&
+        st.phase != Phase::TwoPhase)
+        too_low_pressure(st, "transport properties are");
+    return fn(st);
 }
 
 double get(const State& st, Prop p) {
@@ -118,18 +175,44 @@ double get(const State& st, Prop p) {
     case Prop::U: return st.u;
     case Prop::V: return st.v;
     case Prop::RHO: return st.rho;
-    case Prop::CP: return single_phase(st, st.cp, "cp");
-    case Prop::CV: return single_phase(st, st.cv, "cv");
-    case Prop::W: return single_phase(st, st.w, "The speed of sound");
-    case Prop::KAPPA: return single_phase(st, st.kappa, "The isentropic exponent");
+    case Prop::CP: return single_phase(st, st.cp, p, "cp");
+    case Prop::CV: return single_phase(st, st.cv, p, "cv");
+    case Prop::W: return single_phase(st, st.w, p, "The speed of sound");
+    case Prop::KAPPA: return single_phase(st, st.kappa, p, "The isentropic exponent");
     case Prop::X: return quality(st);
-    case Prop::MU: return viscosity(st);
-    case Prop::LAMBDA: return conductivity(st);
-    case Prop::NU: return kinematic_viscosity(st);
-    case Prop::ALPHA: return thermal_diffusivity(st);
-    case Prop::PR: return prandtl(st);
+    case Prop::MU: return transport(st, [](const State& s) { return viscosity(s); });
+    case Prop::LAMBDA: return transport(st, [](const State& s) { return conductivity(s); });
+    case Prop::NU: return transport(st, [](const State& s) { return kinematic_viscosity(s); });
+    case Prop::ALPHA: return transport(st, [](const State& s) { return thermal_diffusivity(s); });
+    case Prop::PR: return transport(st, [](const State& s) { return prandtl(s); });
     }
     return nan_v;
+}
+
+const char* prop_code(Prop p) {
+    for (const PropSpec& ps : props)
+        if (ps.prop == p) return ps.code;
+    return "";
+}
+
+// (p,T) exactly on the saturation line: the sentence names the saturated
+// liquid and vapour functions of the property asked for.
+[[noreturn]] void on_saturation_line(const std::string& ways) {
+    throw Error(ErrorCode::Impossible,
+                "p and T lie exactly on the saturation line (T = Tsat(p)), where they do not fix the state: use " +
+                    ways + ", or give the quality, h or s instead of T");
+}
+
+State solve_pair(State (*solve)(double, double), double a, double b, const std::string& ways) {
+    if (solve != &state_pT) return solve(a, b);
+    try {
+        return state_pT(a, b);
+    } catch (const RangeError&) {
+        throw;
+    } catch (const Error& e) {
+        if (e.code() == ErrorCode::Impossible) on_saturation_line(ways);
+        throw;
+    }
 }
 
 // Saturated-liquid or -vapour State from a saturation State (x = 0 one).
@@ -150,10 +233,110 @@ std::string lower(std::string s) {
 
 }  // namespace
 
+// ---- Argument ranges -------------------------------------------------------------
+//
+// Limits in core units. Formulation limits come from IAPWS-IF97 (R7-97(2012)
+// Sec. 4: 273.15 K <= T <= 1073.15 K up to 100 MPa, and region 5 to
+// 2273.15 K up to 50 MPa); the enthalpy and entropy limits are the extremes
+// of the core's own IF97 over that range, rounded outward so that no state
+// IF97 covers is refused: h(273.15 K, psat(273.15 K)) = -0.0416 kJ/kg is the
+// lowest enthalpy, h(2273.15 K, p -> 0) = 7376.98 kJ/kg the highest;
+// s(273.15 K, 100 MPa) = -0.0086 kJ/(kg K) the lowest entropy (s has no
+// upper limit as p -> 0: 50 kJ/(kg K) is a sanity limit, reached at 2000 °C
+// only below about 1e-30 MPa). Flows and powers get sanity maxima far above
+// any steam plant (the largest units pass about 2,500 kg/s of main steam
+// and make about 1.75 GW, common practice), so that a wrong cell (a unit
+// mix-up, 1E308) is caught while no real reading is refused.
+
+namespace detail::ranges {
+namespace {
+Range make(double lo, bool lo_open, const char* lo_why, double hi, bool hi_open, const char* hi_why) {
+    Range r;
+    r.min = lo;
+    r.min_open = lo_open;
+    r.min_why = lo_why;
+    r.max = hi;
+    r.max_open = hi_open;
+    r.max_why = hi_why;
+    return r;
+}
+}  // namespace
+
+Range absolute_pressure() {
+    return make(0.0, true, "(an absolute pressure is above 0)", if97::p_max, false, "(the upper limit of IAPWS-IF97)");
+}
+Range temperature() {
+    return make(if97::T_min, false, "(the lowest temperature of IAPWS-IF97)", if97::T_max, false,
+                "(the highest temperature of IAPWS-IF97, region 5)");
+}
+Range enthalpy() {
+    return make(-0.05, false, "(the lowest enthalpy IAPWS-IF97 covers: water at 0 °C)", 7377.0, false,
+                "(the highest enthalpy IAPWS-IF97 covers: steam at 2000 °C)");
+}
+Range entropy() {
+    return make(-0.01, false, "(the lowest entropy IAPWS-IF97 covers: water at 0 °C and 100 MPa)", 50.0, false,
+                "(a sanity limit: steam at 2000 °C reaches it only below about 1e-30 MPa)");
+}
+Range saturation_pressure() {
+    return make(if97::pt, false, "(the triple-point pressure: the saturation line starts there)", if97::pc, false,
+                "(the critical pressure: the saturation line ends there)");
+}
+Range saturation_temperature() {
+    return make(if97::T_min, false, "(the lowest temperature of IAPWS-IF97's saturation line)", if97::Tc, false,
+                "(the critical temperature: the saturation line ends there)");
+}
+Range quality() {
+    return make(0.0, false, "(vapour quality is a mass fraction)", 1.0, false, "(vapour quality is a mass fraction)");
+}
+Range equilibrium_quality() {
+    return make(0.0, false, "(vapour quality; above 1 counts as dry superheated steam)", 100.0, false,
+                "(a sanity limit: above 1 the steam is superheated and counts as dry, and no turbine state "
+                "comes near 100)");
+}
+Range efficiency() {
+    return make(0.0, true, "(an efficiency is a fraction above 0, e.g. 0.85 for 85 %)", 1.0, false,
+                "(an efficiency is a fraction, e.g. 0.85 for 85 %, not a percentage)");
+}
+Range mass_flow(bool zero_ok) {
+    return make(0.0, !zero_ok,
+                zero_ok ? "(a mass flow cannot be negative)" : "(the flow must be above 0 for a result to mean anything)",
+                1e5, false, "(a sanity limit, far above any steam plant's flows: check the units)");
+}
+Range power(bool zero_ok) {
+    return make(0.0, !zero_ok, zero_ok ? "(a power cannot be negative)" : "(the power must be above 0)", 1e7, false,
+                "(a sanity limit of 10 GW, far above any generating unit: check the units, e.g. MW given as kW)");
+}
+Range relative_uncertainty() {
+    return make(0.0, false, "(an uncertainty cannot be negative)", 0.1, false,
+                "(a pressure uncertainty is a fraction of the reading, e.g. 0.0025 for 0.25 %, at most 0.1)");
+}
+Range temperature_uncertainty() {
+    return make(0.0, false, "(an uncertainty cannot be negative)", 10.0, false,
+                "(a sanity limit: a temperature uncertainty is a temperature difference, typically a few tenths "
+                "of a kelvin; a fraction or a percentage of the reading was probably meant, which this argument "
+                "does not take)");
+}
+Range for_quantity(Quantity q) {
+    switch (q) {
+    case Quantity::Pressure: return absolute_pressure();
+    case Quantity::Temperature: return temperature();
+    case Quantity::SpecificEnergy: return enthalpy();
+    case Quantity::SpecificEntropy: return entropy();
+    default: return Range{};
+    }
+}
+}  // namespace detail::ranges
+
+Arg detail::ranged(Arg a, Range r) {
+    a.range = std::move(r);
+    return a;
+}
+
 Arg detail::units_arg() {
     return Arg{"units", Quantity::Text,
-               "Optional units of all inputs and the result: \"SI\" (default), \"US\", \"BAR\", \"KPA\" or "
-               "\"K\", with overrides such as \"US p=psig\" or \"SI p=barg\". May be a cell.",
+               "Optional units of inputs and result: \"SI\" (default), \"US\", \"BAR\", \"KPA\" or \"K\", then "
+               "overrides, e.g. \"US p=psig\"; a bare unit (\"psig\") means SI with it. STEAM.UNITS.SPELL spells "
+               "it out",
                true};
 }
 
@@ -184,12 +367,14 @@ void add_property_family(std::vector<Function>& out) {
                 f.summary += " Range: 0 to 900 °C (32 to 1652 °F), up to 50 MPa (7252 psia) above 800 °C, "
                              "the range of the IAPWS transport releases.";
             if (ps.transport) f.note = detail::transport_note(ps.code);
-            f.args = {Arg{pair.a->arg, pair.a->q, pair.a->description},
-                      Arg{pair.b->arg, pair.b->q, pair.b->description}, units_arg()};
+            f.args = {input_arg(*pair.a), input_arg(*pair.b), units_arg()};
             f.result = ps.q;
             const Prop prop = ps.prop;
             auto solve = pair.solve;
-            f.eval = [prop, solve](const double* a, double* o) { o[0] = get(solve(a[0], a[1]), prop); };
+            const std::string ways = prop == Prop::X ? "STEAM.X.PH(p; h) with the enthalpy" : saturated_ways(prop);
+            f.eval = [prop, solve, ways](const double* a, double* o) {
+                o[0] = get(solve_pair(solve, a[0], a[1], ways), prop);
+            };
             out.push_back(std::move(f));
         }
     }
@@ -227,14 +412,12 @@ void add_saturation_family(std::vector<Function>& out) {
                 f.summary[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(f.summary[0])));
                 if (ps.transport) f.note = detail::transport_note(ps.code);
                 if (by == 0)
-                    f.args = {Arg{"p", Quantity::Pressure,
-                                  "Saturation pressure, from the triple point (611.657 Pa) to the critical "
-                                  "pressure (22.064 MPa)"},
+                    f.args = {detail::ranged(Arg{"p", Quantity::Pressure, "Saturation pressure"},
+                                             detail::ranges::saturation_pressure()),
                               units_arg()};
                 else
-                    f.args = {Arg{"T", Quantity::Temperature,
-                                  "Saturation temperature, from 273.15 K (0 degC) to the critical "
-                                  "temperature (647.096 K)"},
+                    f.args = {detail::ranged(Arg{"T", Quantity::Temperature, "Saturation temperature"},
+                                             detail::ranges::saturation_temperature()),
                               units_arg()};
                 f.result = ps.q;
                 const Prop prop = sp.prop;
@@ -266,8 +449,7 @@ void add_state_family(std::vector<Function>& out) {
                     " as one row: p, T, h, s, u, v, rho, cp, cv, w, kappa, x, region. Enter as an "
                     "array formula over 13 cells (more rows for a range of inputs); with header = 1 "
                     "the first row holds the names and units.";
-        f.args = {Arg{pair.a->arg, pair.a->q, pair.a->description},
-                  Arg{pair.b->arg, pair.b->q, pair.b->description}, units_arg(),
+        f.args = {input_arg(*pair.a), input_arg(*pair.b), units_arg(),
                   Arg{"header", Quantity::None,
                       "Optional: 1 (or TRUE) puts a row of names and units above the values; default 0",
                       true}};
@@ -282,7 +464,9 @@ void add_state_family(std::vector<Function>& out) {
         f.row_quantities.push_back(Quantity::None);
         auto solve = pair.solve;
         f.eval = [solve](const double* a, double* o) {
-            const State st = solve(a[0], a[1]);
+            const State st = solve_pair(solve, a[0], a[1],
+                                        "STEAM.STATE.PX(p; 0) for saturated water or STEAM.STATE.PX(p; 1) for "
+                                        "saturated steam");
             std::size_t i = 0;
             for (Prop p : state_row) {
                 double v;
@@ -349,6 +533,7 @@ void add_examples(std::vector<Function>& out) {
         {"STEAM.HEATRATE.CYCLE", "180; 1100; 3400; 190000; 160; 3000; 3540"},
         {"STEAM.HEATRATE.NET", "180; 1100; 3400; 190000; 9000; 0.88; 160; 3000; 3540"},
         {"STEAM.CONVERT", "150; \"psig\"; \"MPa\""},
+        {"STEAM.UNITS.SPELL", "\"psig\""},
         {"STEAM.EXPLAIN", "\"H.PT\"; 200; 300"},
         {"STEAM.VERSION", ""},
         // Flow meters (ISO 5167): an extraction line (orifice, 4.08 MPa steam), the
@@ -428,8 +613,8 @@ std::vector<Function> build() {
         f.method = "tsat";
         f.category = "Steam saturation";
         f.summary = "Saturation temperature at pressure p (IAPWS-IF97 region 4, R7-97(2012) Eq. 31).";
-        f.args = {Arg{"p", Quantity::Pressure,
-                      "Pressure, from the triple point (611.657 Pa) to the critical pressure (22.064 MPa)"},
+        f.args = {detail::ranged(Arg{"p", Quantity::Pressure, "Pressure (absolute unless a gauge unit is chosen)"},
+                                 detail::ranges::saturation_pressure()),
                   units_arg()};
         f.result = Quantity::Temperature;
         f.eval = [](const double* a, double* o) { o[0] = saturation_temperature(a[0]); };
@@ -441,8 +626,8 @@ std::vector<Function> build() {
         f.method = "psat";
         f.category = "Steam saturation";
         f.summary = "Saturation pressure at temperature T (IAPWS-IF97 region 4, R7-97(2012) Eq. 30).";
-        f.args = {Arg{"T", Quantity::Temperature,
-                      "Temperature, from 273.15 K (0 degC) to the critical temperature (647.096 K)"},
+        f.args = {detail::ranged(Arg{"T", Quantity::Temperature, "Temperature"},
+                                 detail::ranges::saturation_temperature()),
                   units_arg()};
         f.result = Quantity::Pressure;
         f.eval = [](const double* a, double* o) { o[0] = saturation_pressure(a[0]); };
@@ -456,8 +641,8 @@ std::vector<Function> build() {
         f.category = "Steam transport properties";
         f.summary = "Surface tension of water against its vapour at saturation temperature T "
                     "(IAPWS R1-76(2014)).";
-        f.args = {Arg{"T", Quantity::Temperature,
-                      "Saturation temperature, from the triple point 273.16 K to 647.096 K"},
+        f.args = {detail::ranged(Arg{"T", Quantity::Temperature, "Saturation temperature, from the triple point"},
+                                 detail::ranges::saturation_temperature()),
                   units_arg()};
         f.result = Quantity::SurfaceTension;
         f.note = detail::transport_note("SIGMA");
@@ -487,6 +672,18 @@ std::vector<Function> build() {
     }
     {
         Function f;
+        f.name = "STEAM.UNITS.SPELL";
+        f.method = "unitsSpell";
+        f.category = "Steam utilities";
+        f.summary = "Spells out a units text: which unit each quantity gets under it, and for gauge pressures the "
+                    "barometric pressure added to a reading, e.g. STEAM.UNITS.SPELL(\"psig\") says SI with p in "
+                    "psig. Use it to check a workbook's units cell.";
+        f.args = {units_arg()};
+        f.kind = ResultKind::Text;
+        out.push_back(std::move(f));  // evaluated specially by call()
+    }
+    {
+        Function f;
         f.name = "STEAM.EXPLAIN";
         f.method = "explain";
         f.category = "Steam utilities";
@@ -509,6 +706,22 @@ std::vector<Function> build() {
         f.kind = ResultKind::Text;
         out.push_back(std::move(f));
     }
+    // Every family gets the ranges of the common quantities where it has not
+    // set its own: absolute pressures, enthalpies, entropies, flows and powers
+    // (zero allowed: a family that needs more sets its range itself).
+    for (Function& f : out)
+        for (Arg& a : f.args) {
+            if (!std::isnan(a.range.min) || !std::isnan(a.range.max) || a.whole_range || a.varargs) continue;
+            if (f.name == "STEAM.CONVERT") continue;  // any value of any unit
+            switch (a.quantity) {
+            case Quantity::Pressure:
+            case Quantity::SpecificEnergy:
+            case Quantity::SpecificEntropy: a.range = detail::ranges::for_quantity(a.quantity); break;
+            case Quantity::MassFlow: a.range = detail::ranges::mass_flow(true); break;
+            case Quantity::Power: a.range = detail::ranges::power(true); break;
+            default: break;
+            }
+        }
     add_examples(out);
     return out;
 }
@@ -551,6 +764,61 @@ const Function* find(std::string_view name) {
     for (const Function& f : functions())
         if (same_ignoring_case(f.method, name)) return &f;
     return nullptr;
+}
+
+bool arg_accepts(const Function& f, std::size_t i, double v) {
+    if (i >= f.args.size()) return false;
+    return arg_accepts(f.args[i], v);
+}
+
+bool arg_accepts(const Arg& a, double v) {
+    if (a.quantity == Quantity::Text || a.name == "header" || a.varargs || a.whole_range) return false;
+    if (!std::isfinite(v)) return false;
+    const Range& r = a.range;
+    if (!std::isnan(r.min) && (v < r.min || (r.min_open && v == r.min))) return false;
+    if (!std::isnan(r.max) && (v > r.max || (r.max_open && v == r.max))) return false;
+    return true;
+}
+
+RangeError range_error(const Function& f, std::size_t i, double v) { return range_error(f.args.at(i), v); }
+
+RangeError range_error(const Arg& a, double v) {
+    const Range& r = a.range;
+    if (!std::isnan(r.min) && (v < r.min || (r.min_open && v == r.min)))
+        return RangeError(a.name, a.quantity, v, r.min, nan_v, r.min_why);
+    if (!std::isnan(r.max) && (v > r.max || (r.max_open && v == r.max)))
+        return RangeError(a.name, a.quantity, v, nan_v, r.max, r.max_why);
+    return RangeError(a.name, a.quantity, v, nan_v, nan_v, "(it must be a finite number)");
+}
+
+namespace {
+std::string short_num(double v) {
+    char buf[32];
+    if (v == 0) v = 0;
+    std::snprintf(buf, sizeof buf, "%.5g", v);
+    return buf;
+}
+
+std::string range_in(const Arg& a, const units::UnitSpec& spec) {
+    const Range& r = a.range;
+    const bool lo = !std::isnan(r.min), hi = !std::isnan(r.max);
+    auto u = [&](double v) { return short_num(spec.from_core(a.quantity, v)); };
+    std::string t;
+    if (lo && hi) t = (r.min_open ? "above " : "") + u(r.min) + " to " + (r.max_open ? "below " : "") + u(r.max);
+    else if (lo) t = (r.min_open ? "above " : "at least ") + u(r.min);
+    else if (hi) t = (r.max_open ? "below " : "at most ") + u(r.max);
+    const std::string sym = spec.symbol(a.quantity);
+    if (!t.empty() && !sym.empty()) t += " " + sym;
+    return t;
+}
+}  // namespace
+
+std::string range_text(const Function& f, std::size_t i) {
+    const Arg& a = f.args.at(i);
+    if (std::isnan(a.range.min) && std::isnan(a.range.max)) return "";
+    const std::string si = range_in(a, units::UnitSpec::parse("SI"));
+    const std::string us = range_in(a, units::UnitSpec::parse("US"));
+    return si == us ? si : si + " (US: " + us + ")";
 }
 
 const char* version() { return ISENTRA_VERSION; }

@@ -28,4 +28,28 @@ const char* transport_note(const std::string& code);
 // The optional "units" argument shared by all functions.
 Arg units_arg();
 
+// The ranges of the usual argument quantities (core units), each with its
+// reasons; catalogue.cpp gives the source of each limit.
+namespace ranges {
+Range absolute_pressure();           // (0, 100] MPa: IAPWS-IF97 regions 1-3 reach 100 MPa
+Range temperature();                 // [273.15, 2273.15] K: IAPWS-IF97
+Range enthalpy();                    // [-0.05, 7377] kJ/kg: the enthalpies IAPWS-IF97 covers
+Range entropy();                     // [-0.01, 50] kJ/(kg K)
+Range saturation_pressure();         // [611.657 Pa, 22.064 MPa]: triple point to critical point
+Range saturation_temperature();      // [273.15 K, 647.096 K]: IAPWS-IF97's saturation line
+Range quality();                     // [0, 1]
+Range equilibrium_quality();         // [0, 100]: above 1 = superheated (sanity limit 100)
+Range efficiency();                  // (0, 1]
+Range mass_flow(bool zero_ok);       // [0 or (0, 1e5] kg/s
+Range power(bool zero_ok);           // [0 or (0, 1e7] kW
+Range relative_uncertainty();        // [0, 0.1]: a fraction of the reading
+Range temperature_uncertainty();     // [0, 10] K
+// The range of a state input by its quantity: absolute_pressure, temperature,
+// enthalpy or entropy (no bounds for other quantities).
+Range for_quantity(Quantity q);
+}  // namespace ranges
+
+// a with range r.
+Arg ranged(Arg a, Range r);
+
 }  // namespace isentra::catalogue::detail

@@ -12,11 +12,13 @@
 #include "catalogue_detail.hpp"
 
 #include <cmath>
+#include <limits>
 #include <string>
 #include <utility>
 
 #include "isentra/engineering/equipment.hpp"
 #include "isentra/base/error.hpp"
+#include "isentra/if97/if97.hpp"
 #include "isentra/units/units.hpp"
 
 namespace isentra::catalogue::detail {
@@ -84,12 +86,40 @@ const char* const d_p_out = "Outlet pressure (absolute unless a gauge unit is ch
 const char* const d_eta_turbine =
     "Isentropic efficiency as a fraction, 0 to 1 (0.85 for 85 %): (h_in - h_out)/(h_in - h_s)";
 
-Arg p_in() { return Arg{"p_in", Quantity::Pressure, d_p_in}; }
-Arg p_out() { return Arg{"p_out", Quantity::Pressure, d_p_out}; }
-Arg m_arg(const char* n, const char* d) { return Arg{n, Quantity::MassFlow, d}; }
-Arg h_arg(const char* n, const char* d) { return Arg{n, Quantity::SpecificEnergy, d}; }
-Arg T_arg(const char* n, const char* d) { return Arg{n, Quantity::Temperature, d}; }
-Arg p_arg(const char* n, const char* d) { return Arg{n, Quantity::Pressure, d}; }
+Arg p_arg(const char* n, const char* d) { return ranged(Arg{n, Quantity::Pressure, d}, ranges::absolute_pressure()); }
+Arg p_in() { return p_arg("p_in", d_p_in); }
+Arg p_out() { return p_arg("p_out", d_p_out); }
+// zero_ok: whether a zero flow still gives a meaningful result (one stream of a mixer, no cascading drains).
+Arg m_arg(const char* n, const char* d, bool zero_ok) {
+    return ranged(Arg{n, Quantity::MassFlow, d}, ranges::mass_flow(zero_ok));
+}
+Arg h_arg(const char* n, const char* d) { return ranged(Arg{n, Quantity::SpecificEnergy, d}, ranges::enthalpy()); }
+Arg T_arg(const char* n, const char* d) { return ranged(Arg{n, Quantity::Temperature, d}, ranges::temperature()); }
+Arg eta_arg(const char* n, const char* d) { return ranged(Arg{n, Quantity::None, d}, ranges::efficiency()); }
+
+// The Baumann coefficient: above 0 (0 would be no correction at all, and a
+// blank cell counts as 0) up to 3, a sanity limit (the usual value is 1).
+Range baumann_range() {
+    Range r;
+    r.min = 0.0;
+    r.min_open = true;
+    r.min_why = "(the Baumann coefficient is above 0, usually 1; leave the argument out for 1)";
+    r.max = 3.0;
+    r.max_why = "(a sanity limit: the usual value is 1)";
+    return r;
+}
+
+// The outlet has no vapour quality: at or above the critical pressure, or
+// below the triple-point pressure (no liquid phase). A RangeError on p_out so
+// that the sentence is in the user's units.
+[[noreturn]] void no_outlet_quality(double p_out) {
+    if (p_out >= if97::pc)
+        throw RangeError("p_out", Quantity::Pressure, p_out, std::numeric_limits<double>::quiet_NaN(), if97::pc,
+                         "(the critical pressure: vapour quality exists only below it)", ErrorCode::NotDefined);
+    throw RangeError("p_out", Quantity::Pressure, p_out, if97::pt, std::numeric_limits<double>::quiet_NaN(),
+                     "(the triple-point pressure: below it water has no liquid phase, so there is no vapour quality)",
+                     ErrorCode::NotDefined);
+}
 
 // ---- Turbine expansion -------------------------------------------------------------------
 
@@ -102,9 +132,9 @@ struct InletPair {
 
 void add_turbine_expansion(std::vector<Function>& out) {
     const InletPair inlets[] = {
-        {"PT", Arg{"T_in", Quantity::Temperature, d_T_in}, "inlet p and T (superheated steam)",
+        {"PT", T_arg("T_in", d_T_in), "inlet p and T (superheated steam)",
          &eq::turbine_expansion_pT},
-        {"PH", Arg{"h_in", Quantity::SpecificEnergy, d_h_in},
+        {"PH", h_arg("h_in", d_h_in),
          "inlet p and h (wet or superheated steam)",
          &eq::turbine_expansion_ph},
     };
@@ -115,7 +145,7 @@ void add_turbine_expansion(std::vector<Function>& out) {
         const std::string code = in.code;
         auto args = [&]() {
             return std::vector<Arg>{p_in(), in.second, p_out(),
-                                    Arg{"eta", Quantity::None, d_eta_turbine}};
+                                    eta_arg("eta", d_eta_turbine)};
         };
         auto ex = in.expand;
         {
@@ -168,10 +198,7 @@ void add_turbine_expansion(std::vector<Function>& out) {
                                  "at or above the critical pressure." + defn,
                              args(), Quantity::None, [ex](const double* a, double* o) {
                                  const double x = ex(a[0], a[1], a[2], a[3]).x_out;
-                                 if (x != x)
-                                     throw Error(ErrorCode::NotDefined,
-                                                 "vapour quality is not defined at the outlet: it exists only "
-                                                 "below the critical pressure (22.064 MPa)");
+                                 if (x != x) no_outlet_quality(a[2]);
                                  o[0] = x;
                              }));
         out.push_back(number(("STEAM.TURBINE.WORK." + code).c_str(), ("turbineWork" + code).c_str(), cat_turbine,
@@ -217,14 +244,18 @@ void add_section_efficiency(std::vector<Function>& out) {
             T_arg("T_in", d_T_in),
             p_out(),
             T_arg("T_out", "Outlet temperature (superheated steam)"),
-            Arg{"u_p_in", Quantity::None,
-                "Uncertainty of the inlet pressure reading as a fraction of the reading (0.0025 for 0.25 %; at most "
-                "0.1); of the gauge reading when the units give a gauge pressure (e.g. \"SI p=barg\")"},
-            Arg{"u_T_in", Quantity::TemperatureDifference, "Uncertainty of the inlet temperature reading"},
-            Arg{"u_p_out", Quantity::None,
-                "Uncertainty of the outlet pressure reading as a fraction of the reading (0.0025 for 0.25 %; at "
-                "most 0.1); of the gauge reading when the units give a gauge pressure"},
-            Arg{"u_T_out", Quantity::TemperatureDifference, "Uncertainty of the outlet temperature reading"}};
+            ranged(Arg{"u_p_in", Quantity::None,
+                       "Uncertainty of the inlet pressure reading as a fraction of the reading (0.0025 for 0.25 "
+                       "%); of the gauge reading when the units give a gauge pressure (e.g. \"SI p=barg\")"},
+                   ranges::relative_uncertainty()),
+            ranged(Arg{"u_T_in", Quantity::TemperatureDifference, "Uncertainty of the inlet temperature reading"},
+                   ranges::temperature_uncertainty()),
+            ranged(Arg{"u_p_out", Quantity::None,
+                       "Uncertainty of the outlet pressure reading as a fraction of the reading (0.0025 for 0.25 "
+                       "%); of the gauge reading when the units give a gauge pressure"},
+                   ranges::relative_uncertainty()),
+            ranged(Arg{"u_T_out", Quantity::TemperatureDifference, "Uncertainty of the outlet temperature reading"},
+                   ranges::temperature_uncertainty())};
     };
     const std::string method =
         " By the root-sum-square of sensitivity coefficient times instrument uncertainty (ASME PTC 19.1), "
@@ -279,13 +310,16 @@ void add_section_efficiency(std::vector<Function>& out) {
         "mean moisture).";
     auto baumann_args = [](const char* eta_name, const char* eta_desc) {
         return std::vector<Arg>{
-            Arg{eta_name, Quantity::None, eta_desc},
-            Arg{"x_in", Quantity::None, "Vapour quality at the stage or section inlet (above 1 = superheated)"},
-            Arg{"x_out", Quantity::None, "Vapour quality at the stage or section outlet"},
-            Arg{"a", Quantity::None,
-                "Optional Baumann coefficient: efficiency fraction lost per unit of mean moisture; default 1, "
-                "the usual value",
-                true, false, 1.0}};
+            eta_arg(eta_name, eta_desc),
+            ranged(Arg{"x_in", Quantity::None, "Vapour quality at the stage or section inlet (above 1 = superheated)"},
+                   ranges::equilibrium_quality()),
+            ranged(Arg{"x_out", Quantity::None, "Vapour quality at the stage or section outlet"},
+                   ranges::equilibrium_quality()),
+            ranged(Arg{"a", Quantity::None,
+                       "Optional Baumann coefficient: efficiency fraction lost per unit of mean moisture; default 1, "
+                       "the usual value",
+                       true, false, 1.0},
+                   baumann_range())};
     };
     out.push_back(number("STEAM.BAUMANN.WET", "baumannWet", cat_turbine,
                          "Efficiency of a stage or section working in wet steam from its dry-steam efficiency." +
@@ -313,10 +347,10 @@ void add_pump(std::vector<Function>& out) {
         eq::Pumping (*fn)(double, double, double, double);
     };
     const P inlets[] = {
-        {"PT", Arg{"T_in", Quantity::Temperature, "Inlet temperature (subcooled water)"},
+        {"PT", T_arg("T_in", "Inlet temperature (subcooled water)"),
          "inlet pressure and temperature", " the inlet must be subcooled water (for saturated water use the PH form).",
          &eq::pump_pT},
-        {"PH", Arg{"h_in", Quantity::SpecificEnergy, "Inlet specific enthalpy (subcooled or saturated water)"},
+        {"PH", h_arg("h_in", "Inlet specific enthalpy (subcooled or saturated water)"),
          "inlet pressure and enthalpy", " the inlet is subcooled or saturated water, e.g. h_in = STEAM.HF.P(p_in).",
          &eq::pump_ph},
     };
@@ -325,9 +359,9 @@ void add_pump(std::vector<Function>& out) {
         auto args = [&]() {
             return std::vector<Arg>{
                 p_in(), in.second, p_out(),
-                Arg{"eta", Quantity::None,
-                    "Pump isentropic efficiency as a fraction, above 0 to 1 (0.80 for 80 %): (h_s - h_in)/(h_out - "
-                    "h_in)"}};
+                eta_arg("eta",
+                        "Pump isentropic efficiency as a fraction, above 0 to 1 (0.80 for 80 %): (h_s - h_in)/(h_out "
+                        "- h_in)")};
         };
         const std::string defn = std::string(" Work (h_s - h_in)/eta, h_s = h(p_out, s_in);") + in.inlet;
         const std::string words = in.words;
@@ -376,8 +410,8 @@ void add_valve(std::vector<Function>& out) {
         eq::Throttling (*fn)(double, double, double);
     };
     const V inlets[] = {
-        {"PT", Arg{"T_in", Quantity::Temperature, d_T_in}, "inlet pressure and temperature", &eq::valve_pT},
-        {"PH", Arg{"h_in", Quantity::SpecificEnergy, d_h_in}, "inlet pressure and enthalpy", &eq::valve_ph},
+        {"PT", T_arg("T_in", d_T_in), "inlet pressure and temperature", &eq::valve_pT},
+        {"PH", h_arg("h_in", d_h_in), "inlet pressure and enthalpy", &eq::valve_ph},
     };
     for (const V& v : inlets) {
         const std::string code = v.code;
@@ -414,10 +448,7 @@ void add_valve(std::vector<Function>& out) {
                                  "error at or above the critical pressure." + defn,
                              args(), Quantity::None, [fn](const double* a, double* o) {
                                  const double x = fn(a[0], a[1], a[2]).x_out;
-                                 if (x != x)
-                                     throw Error(ErrorCode::NotDefined,
-                                                 "vapour quality is not defined at the outlet: it exists only "
-                                                 "below the critical pressure (22.064 MPa)");
+                                 if (x != x) no_outlet_quality(a[2]);
                                  o[0] = x;
                              }));
     }
@@ -427,12 +458,12 @@ void add_valve(std::vector<Function>& out) {
 
 void add_mixing(std::vector<Function>& out) {
     auto streams = []() {
-        return std::vector<Arg>{m_arg("m1", "Mass flow of stream 1"), h_arg("h1", "Specific enthalpy of stream 1"),
-                                m_arg("m2", "Mass flow of stream 2"), h_arg("h2", "Specific enthalpy of stream 2")};
+        return std::vector<Arg>{m_arg("m1", "Mass flow of stream 1", true), h_arg("h1", "Specific enthalpy of stream 1"),
+                                m_arg("m2", "Mass flow of stream 2", true), h_arg("h2", "Specific enthalpy of stream 2")};
     };
     auto with_p = [&]() {
         std::vector<Arg> a = streams();
-        a.push_back(Arg{"p", Quantity::Pressure, "Pressure of the mixed stream"});
+        a.push_back(p_arg("p", "Pressure of the mixed stream"));
         return a;
     };
     const std::string defn = " Adiabatic mixing: h = (m1 h1 + m2 h2)/(m1 + m2).";
@@ -470,7 +501,7 @@ void add_mixing(std::vector<Function>& out) {
         "Spray-water flow of a desuperheater for a target outlet temperature, from its energy balance. "
         "Formula: m_w = m_steam (h_steam - h_out)/(h_out - h_water); the outlet is at the steam pressure and "
         "must stay superheated.",
-        {m_arg("m_steam", "Steam flow entering the desuperheater (before the spray)"),
+        {m_arg("m_steam", "Steam flow entering the desuperheater (before the spray)", false),
          p_arg("p_steam", "Steam pressure (also the outlet pressure)"),
          T_arg("T_steam", "Steam temperature before the spray (superheated)"),
          p_arg("p_water", "Spray-water pressure"), T_arg("T_water", "Spray-water temperature"),
@@ -509,13 +540,15 @@ void add_fwh(std::vector<Function>& out) {
         "Extraction steam flow to a closed feedwater heater from its energy balance (ASME PTC 12.1). It is "
         "m_ext = (m_fw (h_fw_out - h_fw_in) - m_casc (h_casc - h_drain)) / (h_ext - h_drain). Enthalpies from "
         "e.g. STEAM.H.PT; m_casc and h_casc only for drains cascading in from the heater above.",
-        {m_arg("m_fw", "Feedwater flow through the heater"), h_arg("h_fw_in", "Feedwater inlet enthalpy"),
+        {m_arg("m_fw", "Feedwater flow through the heater", false), h_arg("h_fw_in", "Feedwater inlet enthalpy"),
          h_arg("h_fw_out", "Feedwater outlet enthalpy"), h_arg("h_ext", "Extraction steam enthalpy at the heater inlet"),
          h_arg("h_drain", "Drain outlet enthalpy"),
-         Arg{"m_casc", Quantity::MassFlow, "Optional: cascading drain flow from the heater above; default 0 (none)",
-             true, false, 0.0},
-         Arg{"h_casc", Quantity::SpecificEnergy,
-             "Optional: enthalpy of the cascading drain; needed when m_casc is above 0", true}},
+         ranged(Arg{"m_casc", Quantity::MassFlow,
+                    "Optional: cascading drain flow from the heater above; default 0 (none)", true, false, 0.0},
+                ranges::mass_flow(true)),
+         ranged(Arg{"h_casc", Quantity::SpecificEnergy,
+                    "Optional: enthalpy of the cascading drain; needed when m_casc is above 0", true},
+                ranges::enthalpy())},
         Quantity::MassFlow, [](const double* a, double* o) {
             double h_casc = a[6];
             if (a[5] == 0.0 && std::isnan(h_casc)) h_casc = a[4];  // no cascading drains: its enthalpy plays no part
@@ -534,16 +567,22 @@ void add_heat_rate(std::vector<Function>& out) {
     // (and for the net heat rate the auxiliary power and boiler efficiency),
     // then the reheat stream as optional trailing arguments.
     auto main_args = []() {
-        return std::vector<Arg>{m_arg("m_ms", "Main steam flow (leaving the boiler)"),
+        return std::vector<Arg>{m_arg("m_ms", "Main steam flow (leaving the boiler)", false),
                                 h_arg("h_fw", "Final feedwater enthalpy (entering the boiler)"),
                                 h_arg("h_ms", "Main steam enthalpy"),
-                                Arg{"P_gen", Quantity::Power, "Generator output (gross)"}};
+                                ranged(Arg{"P_gen", Quantity::Power, "Generator output (gross)"},
+                                       ranges::power(false))};
     };
     auto reheat = [](std::vector<Arg>& a) {
-        a.push_back(Arg{"m_rh", Quantity::MassFlow, "Optional: reheat steam flow; default 0 (no reheat)", true,
-                        false, 0.0});
-        a.push_back(Arg{"h_crh", Quantity::SpecificEnergy, "Optional: cold reheat enthalpy (reheater inlet)", true});
-        a.push_back(Arg{"h_hrh", Quantity::SpecificEnergy, "Optional: hot reheat enthalpy (reheater outlet)", true});
+        a.push_back(ranged(Arg{"m_rh", Quantity::MassFlow, "Optional: reheat steam flow; default 0 (no reheat)", true,
+                               false, 0.0},
+                           ranges::mass_flow(true)));
+        a.push_back(ranged(Arg{"h_crh", Quantity::SpecificEnergy, "Optional: cold reheat enthalpy (reheater inlet)",
+                               true},
+                           ranges::enthalpy()));
+        a.push_back(ranged(Arg{"h_hrh", Quantity::SpecificEnergy, "Optional: hot reheat enthalpy (reheater outlet)",
+                               true},
+                           ranges::enthalpy()));
     };
     // a[k..k+2] = m_rh, h_crh, h_hrh; without reheat the enthalpies play no part.
     struct Reheat {
@@ -574,8 +613,9 @@ void add_heat_rate(std::vector<Function>& out) {
                              o[0] = eq::cycle_heat_rate(a[0], a[2], a[1], r.m, r.h_hrh, r.h_crh, a[3]);
                          }));
     std::vector<Arg> net = main_args();
-    net.push_back(Arg{"P_aux", Quantity::Power, "Auxiliary power (station service) taken from the generator output"});
-    net.push_back(Arg{"eta_boiler", Quantity::None, "Boiler (steam generator) efficiency as a fraction (0.88 for 88 %)"});
+    net.push_back(ranged(Arg{"P_aux", Quantity::Power, "Auxiliary power (station service) taken from the generator output"},
+                         ranges::power(true)));
+    net.push_back(eta_arg("eta_boiler", "Boiler (steam generator) efficiency as a fraction (0.88 for 88 %)"));
     reheat(net);
     out.push_back(number("STEAM.HEATRATE.NET", "heatRateNet", cat_performance,
                          "Net unit heat rate (Q / eta_boiler) / (P_gen - P_aux): fuel heat per unit of net "

@@ -30,6 +30,11 @@ namespace {
 
 constexpr double nan_v = std::numeric_limits<double>::quiet_NaN();
 
+// A state argument with the range of its quantity (catalogue_detail.hpp).
+Arg state_arg(const char* name, Quantity q, const char* description) {
+    return ranged(Arg{name, q, description}, ranges::for_quantity(q));
+}
+
 const char* const cat_metastable = "Steam metastable vapour";
 const char* const cat_transport = "Steam transport properties";
 
@@ -121,7 +126,7 @@ void add_metastable(std::vector<Function>& out) {
                         " (IAPWS-IF97 Eq. 18). Supersaturated steam, valid from the 5 % moisture line to "
                         "saturation at p <= 10 MPa.";
             f.note = mv_note;
-            f.args = {Arg{in_p.arg, in_p.q, in_p.description}, Arg{pair.b->arg, pair.b->q, pair.b->description},
+            f.args = {state_arg(in_p.arg, in_p.q, in_p.description), state_arg(pair.b->arg, pair.b->q, pair.b->description),
                       units_arg()};
             f.result = pr.q;
             const P prop = pr.prop;
@@ -140,7 +145,7 @@ void add_metastable(std::vector<Function>& out) {
                     " (IAPWS-IF97 Eq. 18) as one row: p, T, h, s, u, v, rho, cp, cv, w, kappa, x. "
                     "Array formula over 12 cells; x is the equilibrium quality.";
         f.note = mv_note;
-        f.args = {Arg{in_p.arg, in_p.q, in_p.description}, Arg{pair.b->arg, pair.b->q, pair.b->description},
+        f.args = {state_arg(in_p.arg, in_p.q, in_p.description), state_arg(pair.b->arg, pair.b->q, pair.b->description),
                   units_arg(),
                   Arg{"header", Quantity::None,
                       "Optional: 1 (or TRUE) puts a row of names and units above the values; default 0", true}};
@@ -215,7 +220,7 @@ void add_mucrit(std::vector<Function>& out) {
                     " with the critical enhancement mu_2 (IAPWS R12-08 Sec. 2.7). Above STEAM.MU only near the "
                     "critical point: 7.5 % at 647.35 K, 322 kg/m3.";
         f.note = mucrit_note;
-        f.args = {Arg{pair.a_arg, pair.a_q, pair.a_desc}, Arg{pair.b_arg, pair.b_q, pair.b_desc}, units_arg()};
+        f.args = {state_arg(pair.a_arg, pair.a_q, pair.a_desc), state_arg(pair.b_arg, pair.b_q, pair.b_desc), units_arg()};
         f.result = Quantity::DynamicViscosity;
         auto solve = pair.solve;
         f.eval = [solve](const double* a, double* o) { o[0] = viscosity_with_enhancement(solve(a[0], a[1])); };

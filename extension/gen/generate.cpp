@@ -418,6 +418,8 @@ std::string functions_md(const std::vector<cat::Function>& fs) {
          "`key=unit`, separated by blanks: \"US\", \"US p=psig\", \"SI p=barg T=K\", \"BAR h=kcal/kg\". "
          "A text that starts with an override or a bare unit, such as \"psig\" or \"p=psig\", means SI "
          "with that one quantity changed: `STEAM.TSAT(150; \"psig\")` reads 150 psig and answers in °C. "
+         "`STEAM.UNITS.SPELL(\"psig\")` spells out what a units text means, quantity by quantity, with "
+         "the barometric pressure a gauge unit adds. "
          "Gauge pressures are relative to the standard atmosphere (101.325 kPa) unless the text gives "
          "the local barometric pressure, e.g. \"US p=psig patm=14.2psia\". Unit spellings are "
          "case-insensitive where that is unambiguous. Temperature differences (TTD, DCA, approach, "
@@ -431,11 +433,15 @@ std::string functions_md(const std::vector<cat::Function>& fs) {
       << "## Blank cells, ranges and errors\n\n"
       << "- **A blank cell counts as 0.** Calc passes a reference to an empty cell to an add-in as the "
          "number 0 before the add-in sees it, so `=STEAM.H.PT(1; Z1)` with Z1 empty is the enthalpy at "
-         "0 °C, not an error. Check that the cells a formula reads are filled in, or leave the result "
+         "0 °C, not an error. Where 0 is not a possible value (an absolute pressure or temperature, an "
+         "efficiency, a flow or power that must be above 0) the function refuses it, and its sentence "
+         "adds \"a blank cell counts as 0\". Check that the cells a formula reads are filled in, or leave the result "
          "blank while a reading is blank (the Isentra workbooks do). A blank cell inside a range of two "
          "or more cells is an error (\"the argument T is empty\").\n"
       << "- **Ranges.** Numeric arguments may be ranges: `{=STEAM.H.PT(A2:A500; B2:B500)}` converts a "
-         "whole column in one array formula (Ctrl+Shift+Enter); a single value is used for every row.\n"
+         "whole column in one array formula (Ctrl+Shift+Enter); a single value is used for every row. "
+         "Each argument's own range (what it accepts) is in its table below; a value outside it is an "
+         "error whose sentence gives the limit and its reason.\n"
       << "- **Errors.** An invalid input gives an error value: Err:502 in a cell, #NUM! for one element "
          "of an array result, Err:504 when a required argument is missing or there are too many. "
          "`=STEAM.EXPLAIN(\"H.PT\"; same arguments)` returns the reason as a sentence in your units.\n\n"
@@ -495,6 +501,8 @@ std::string functions_md(const std::vector<cat::Function>& fs) {
                     }
                     std::string d = a.description;
                     if (!d.empty() && d.back() != '.') d += ".";
+                    const std::string range = cat::range_text(f, i);  // the values call() accepts
+                    if (!range.empty()) d += " Range " + range + ".";
                     o << "| " << name << " | " << md(d) << " | " << md(si_symbol(a.quantity)) << " | "
                       << md(us_symbol(a.quantity)) << " |\n";
                 }

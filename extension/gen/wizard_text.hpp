@@ -141,13 +141,18 @@ inline std::string function_text(const catalogue::Function& f) {
     return body + tail + hint;
 }
 
-// An argument's Wizard text: its description and its units in SI and US.
+// An argument's Wizard text: its description, its units in SI and US, and
+// its range (catalogue::range_text) where that still fits; the range is
+// always in docs/functions.md.
 inline std::string arg_text(const catalogue::Function& f, std::size_t i) {
     const catalogue::Arg& a = f.args.at(i);
     std::string d = a.description;
     if (d.empty() || d.back() != '.') d += ".";
     const std::string u = unit_pair(a.quantity);
-    return u.empty() ? d : d + " " + u;
+    std::string t = u.empty() ? d : d + " " + u;
+    const std::string r = catalogue::range_text(f, i);
+    if (!r.empty() && fits(t + " Range " + r + ".")) t += " Range " + r + ".";
+    return t;
 }
 
 }  // namespace isentra::wizard

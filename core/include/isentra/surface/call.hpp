@@ -4,6 +4,7 @@
 // error sentences in the user's units. Shared by the Calc add-in and the CLI.
 #pragma once
 
+#include <cstdint>
 #include <string>
 #include <vector>
 
@@ -102,6 +103,7 @@ private:
     std::vector<std::size_t> order_;  // slot indexes in argument order (call() checks arguments in that order)
     std::vector<double> a_;  // the numeric arguments in core units, constants filled in
     std::size_t width_ = 1;
+    std::uint32_t zero_mask_ = 0;  // bit pos: the constant a_[pos] was given as 0 (for "a blank cell counts as 0")
 };
 
 }  // namespace isentra

@@ -15,6 +15,7 @@
 #include <string_view>
 #include <vector>
 
+#include "isentra/base/error.hpp"
 #include "isentra/base/quantity.hpp"
 
 namespace isentra::units {
@@ -22,6 +23,18 @@ class UnitSpec;
 }
 
 namespace isentra::catalogue {
+
+// The values an argument can take: the physical range of its quantity or
+// the range the formulation covers (IAPWS-IF97), in core units. call()
+// checks it for every numeric argument before evaluating (one place), and
+// the Wizard text (extension/gen/wizard_text.hpp) and docs/functions.md state
+// it (range_text). A bound is NaN where there is none.
+struct Range {
+    double min = std::numeric_limits<double>::quiet_NaN();
+    double max = std::numeric_limits<double>::quiet_NaN();
+    bool min_open = false, max_open = false;  // true: the bound itself is refused (eta > 0)
+    std::string min_why, max_why;             // "(...)", the reason a sentence gives for each bound
+};
 
 struct Arg {
     std::string name;         // as shown in the Function Wizard, e.g. "p"
@@ -36,6 +49,7 @@ struct Arg {
     // A dimensionless numeric argument taken whole, not broadcast: a range
     // (e.g. a calibration table) or a single value, handed to eval_extra.
     bool whole_range = false;
+    Range range = {};  // no bounds unless set
 };
 
 enum class ResultKind {
@@ -102,6 +116,26 @@ const std::vector<Function>& functions();
 // Finds a function by display name (case-insensitive, with or without the
 // "STEAM." prefix) or by UNO method name. nullptr if unknown.
 const Function* find(std::string_view name);
+
+// Argument ranges. arg_accepts() is false when argument i of f cannot take
+// core_value (in core units; NaN and infinities are never accepted): the call
+// then gives an error whatever the other arguments are. true means only that
+// this argument alone does not make the call an error (a state may still lie
+// outside the formulation, e.g. a temperature above what region 5 covers at a
+// pressure). Text arguments (units, names) and the header flag accept no
+// number through this function; the header flag is checked by call().
+bool arg_accepts(const Function& f, std::size_t i, double core_value);
+// The error call() gives for a refused value (core units; the call layer
+// words it in the user's units and adds "a blank cell counts as 0" where the
+// cell held 0): the bound that is crossed and its reason.
+// Precondition: !arg_accepts(f, i, core_value).
+RangeError range_error(const Function& f, std::size_t i, double core_value);
+// The same for an argument on its own.
+bool arg_accepts(const Arg& a, double core_value);
+RangeError range_error(const Arg& a, double core_value);
+// The range as Function Wizard words, e.g. "above 0 to 1" or "-0.05 to 7377
+// kJ/kg (US: -0.0215 to 3172 Btu/lbm)"; "" when the argument has no range.
+std::string range_text(const Function& f, std::size_t i);
 
 // The version of the add-in (project version).
 const char* version();
