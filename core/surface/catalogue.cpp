@@ -707,14 +707,19 @@ std::vector<Function> build() {
         out.push_back(std::move(f));
     }
     // Every family gets the ranges of the common quantities where it has not
-    // set its own: absolute pressures, enthalpies, entropies, flows and powers
-    // (zero allowed: a family that needs more sets its range itself).
+    // set its own: absolute pressures, IAPWS-IF97 temperatures, enthalpies,
+    // entropies, flows and powers (zero allowed: a family that needs more sets
+    // its range itself), and efficiencies (arguments named eta or eta_...).
     for (Function& f : out)
         for (Arg& a : f.args) {
             if (!std::isnan(a.range.min) || !std::isnan(a.range.max) || a.whole_range || a.varargs) continue;
             if (f.name == "STEAM.CONVERT") continue;  // any value of any unit
             switch (a.quantity) {
+            case Quantity::None:
+                if (a.name == "eta" || a.name.rfind("eta_", 0) == 0) a.range = detail::ranges::efficiency();
+                break;
             case Quantity::Pressure:
+            case Quantity::Temperature:
             case Quantity::SpecificEnergy:
             case Quantity::SpecificEntropy: a.range = detail::ranges::for_quantity(a.quantity); break;
             case Quantity::MassFlow: a.range = detail::ranges::mass_flow(true); break;

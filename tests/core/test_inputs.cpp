@@ -71,10 +71,10 @@ TEST(InputRanges, EveryEnthalpyFlowEfficiencyQualityUncertaintyAndPowerArgumentH
             // temperatures and uncertainties in its own functions).
             const bool all = a.quantity == Quantity::SpecificEnergy || a.quantity == Quantity::SpecificEntropy ||
                              a.quantity == Quantity::MassFlow || a.quantity == Quantity::Power ||
-                             a.quantity == Quantity::Pressure;
+                             a.quantity == Quantity::Pressure || a.quantity == Quantity::Temperature ||
+                             a.name.rfind("eta", 0) == 0;
             const bool ours = f.name.rfind("STEAM.FLOW.", 0) != 0 &&
-                              (a.quantity == Quantity::Temperature || a.quantity == Quantity::TemperatureDifference ||
-                               a.name.rfind("eta", 0) == 0 || a.name.rfind("x", 0) == 0 || a.name.rfind("u_", 0) == 0);
+                              (a.name.rfind("x", 0) == 0 || a.name.rfind("u_", 0) == 0);
             const bool needs = all || ours;
             if (!needs) continue;
             ++checked;
