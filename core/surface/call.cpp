@@ -327,18 +327,39 @@ void evaluate_state(const Function& f, const units::UnitSpec& spec, const catalo
                     Put&& put, std::uint32_t zero_mask) {
     double res[32];
     const std::size_t width = result_width(f);
+    // An argument so close to 0 (1e-320, a denormal) that the calculation
+    // overflows: the sentence names it instead of an overflowing intermediate.
+    auto tiny_sentence = [&]() -> std::string {
+        std::size_t j = 0;
+        for (const catalogue::Arg& arg : f.args) {
+            if (arg.quantity == Quantity::Text || arg.whole_range || arg.name == "header") continue;
+            const double v = a[j++];
+            if (v != 0.0 && std::fabs(v) < 1e-100 && arg.quantity != Quantity::Temperature)
+                return arg.name + " = " + fmt(spec.from_core(arg.quantity, v)) + " is so close to 0 that " + f.name +
+                       " has no finite result";
+        }
+        return "";
+    };
     try {
         evaluate_raw(f, spec, extra, a, res);
         for (std::size_t c = 0; c < width; ++c) {
             const double v = res[c];
-            if (!std::isfinite(v))
-                put(c, Value::of_error(ErrorCode::NotDefined, (f.kind == ResultKind::Row ? f.row_names[c] : f.name) +
-                                                                  " is not defined for this state"));
-            else
+            if (!std::isfinite(v)) {
+                const std::string tiny = tiny_sentence();
+                put(c, Value::of_error(ErrorCode::NotDefined,
+                                       !tiny.empty() ? tiny
+                                                     : (f.kind == ResultKind::Row ? f.row_names[c] : f.name) +
+                                                           " is not defined for this state"));
+            } else
                 put(c, Value::of(spec.from_core(result_quantity_of(f, c), v)));
         }
     } catch (const Error& e) {
         Value ev = error_value(e, spec);
+        const auto* rv = dynamic_cast<const RangeError*>(&e);
+        if (rv && !std::isfinite(rv->value())) {
+            const std::string tiny = tiny_sentence();
+            if (!tiny.empty()) ev.text = tiny;
+        }
         if (const auto* re = dynamic_cast<const RangeError*>(&e)) {
             std::size_t j = 0;
             for (const catalogue::Arg& arg : f.args) {

@@ -276,6 +276,17 @@ TEST(InputSentences, OutletQualityNamesTheRealReason) {
     EXPECT_TRUE(has(s, "critical pressure")) << s;
 }
 
+TEST(InputSentences, DenormalArgumentsAreNamed) {
+    // 1e-320 (a denormal) where a division or a specific volume overflows: the sentence
+    // names that argument, not an intermediate such as h_out = inf.
+    std::string s = error_of(nums("STEAM.PUMP.HOUT.PT", {0.1, 40, 10, 1e-320}));
+    EXPECT_TRUE(has(s, "eta = ")) << s;
+    EXPECT_TRUE(has(s, "is so close to 0 that STEAM.PUMP.HOUT.PT has no finite result")) << s;
+    s = error_of(nums("STEAM.V.PT", {1e-320, 300}));
+    EXPECT_TRUE(has(s, "p = ")) << s;
+    EXPECT_TRUE(has(s, "so close to 0")) << s;
+}
+
 TEST(InputSentences, TextArgumentsSayWhatTheyHold) {
     std::string s = error_of(run("CONVERT", {Value::of(1), Value::of(2), Value::of_text("MPa")}));
     EXPECT_TRUE(has(s, "the argument from must be a unit such as \"psig\" or \"kJ/kg\"")) << s;
