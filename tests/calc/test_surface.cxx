@@ -197,6 +197,41 @@ TEST_F(SurfaceTest, ErrorsShowErr502AndExplainGivesTheSentenceInTheUsersUnits) {
     EXPECT_EQ(string("D2"), e2.text);
 }
 
+TEST_F(SurfaceTest, BlankCellsHeaderFlagExplainAndUnitsSpellInCalc) {
+    // A reference to a blank cell reaches the add-in as 0 (LibreOffice's interpreter):
+    // where 0 is no possible value the call is an error and the sentence says so.
+    formula("C1", "=STEAM.TURBINE.HOUT.PT(10;500;1;Z1)");
+    formula("D1", "=STEAM.EXPLAIN(\"TURBINE.HOUT.PT\";10;500;1;Z1)");
+    formula("C2", "=STEAM.H.PT(Z1;100)");
+    formula("D2", "=STEAM.EXPLAIN(\"H.PT\";Z1;100)");
+    // The header flag: TRUE arrives as 1 (a header row), -1 and a text are refused.
+    array_formula("A4:M5", "=STEAM.STATE.PT(1;300;\"SI\";TRUE())");
+    formula("C6", "=STEAM.STATE.PT(1;300;\"SI\";-1)");
+    formula("D6", "=STEAM.EXPLAIN(\"STATE.PT\";1;300;\"SI\";\"yes\")");
+    // STEAM.EXPLAIN answers an unknown name with a sentence, not Err:502.
+    formula("C7", "=STEAM.EXPLAIN(\"TURBINE.HOUT.TP\";10;500;1;0.85)");
+    formula("C8", "=STEAM.UNITS.SPELL(\"psig\")");
+    // The pump from a saturated inlet: (p, h') by STEAM.HF.P.
+    formula("C9", "=STEAM.PUMP.HOUT.PH(0.008;STEAM.HF.P(0.008);16.5;0.85)");
+    recalc();
+    EXPECT_EQ(error("C1"), IllegalArgument) << string("C1");
+    EXPECT_NE(string("D1").find("eta = 0"), std::string::npos) << string("D1");
+    EXPECT_NE(string("D1").find("a blank cell counts as 0"), std::string::npos) << string("D1");
+    EXPECT_EQ(error("C2"), IllegalArgument) << string("C2");
+    EXPECT_NE(string("D2").find("a blank cell counts as 0"), std::string::npos) << string("D2");
+    EXPECT_EQ(string("A4"), "p [MPa]");
+    EXPECT_NEAR(value("A5"), 1.0, 0.0);
+    EXPECT_EQ(error("C6"), IllegalArgument) << string("C6");
+    EXPECT_NE(string("D6").find("header must be TRUE or FALSE"), std::string::npos) << string("D6");
+    ASSERT_EQ(error("C7"), NoError) << string("C7");
+    EXPECT_NE(string("C7").find("STEAM.TURBINE.HOUT.PT"), std::string::npos) << string("C7");
+    ASSERT_EQ(error("C8"), NoError) << string("C8");
+    EXPECT_NE(string("C8").find("means SI p=psig"), std::string::npos) << string("C8");
+    // python3-iapws 1.5.2 (Debian): h_out = 193.35047373066845 kJ/kg (tests/core/test_equipment.cpp).
+    ASSERT_EQ(error("C9"), NoError) << string("C9");
+    EXPECT_NEAR(value("C9"), 193.35047373066845, 1e-6);
+}
+
 // ---- arrays ------------------------------------------------------------------------
 
 TEST_F(SurfaceTest, ArraysColumnsBroadcastShapesAndElementErrors) {
