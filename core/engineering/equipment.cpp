@@ -384,7 +384,18 @@ Pumping pump_from(const State& in, double p_in, double p_out, double eta) {
         throw RangeError("p_out", Quantity::Pressure, p_out, p_in, none,
                          "(the inlet pressure p_in: a pump raises the pressure)");
     const Names o{"p_out", "T_out", "h_out", "s_in (isentropic end point at p_out)"};
-    const State iso = ps(p_out, in.s, o);
+    State iso;
+    try {
+        iso = ps(p_out, in.s, o);
+    } catch (const RangeError& e) {
+        // Water just above 0 °C cools when compressed isentropically (its expansion
+        // coefficient is negative below about 4 °C), so the end point can fall below IF97.
+        if (!(in.T < 281.0 && e.low() == e.low() && e.value() < e.low())) throw;
+        throw Error(ErrorCode::OutOfRange,
+                    "the isentropic end point at p_out would be colder than 273.15 K, below the range of "
+                    "IAPWS-IF97: water this close to 0 °C cools when compressed isentropically (its expansion "
+                    "coefficient is negative below about 4 °C); check T_in");
+    }
     Pumping r;
     r.h_in = in.h;
     r.s_in = in.s;

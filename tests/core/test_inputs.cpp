@@ -287,6 +287,15 @@ TEST(InputSentences, DenormalArgumentsAreNamed) {
     EXPECT_TRUE(has(s, "so close to 0")) << s;
 }
 
+TEST(InputSentences, PumpInletNearZeroCelsius) {
+    // Water at 0 °C cools when compressed isentropically (negative expansion coefficient below
+    // about 4 °C, common practice), so h(p_out, s_in) falls below IF97's 273.15 K.
+    const std::string s = error_of(nums("STEAM.PUMP.HOUT.PT", {0.008, 0, 2.5, 0.8}));
+    EXPECT_TRUE(has(s, "isentropic end point at p_out would be colder than 273.15 K")) << s;
+    EXPECT_TRUE(has(s, "check T_in")) << s;
+    EXPECT_EQ(nums("STEAM.PUMP.HOUT.PT", {0.008, 5, 2.5, 0.8}).kind, Value::Kind::Number);
+}
+
 TEST(InputSentences, TextArgumentsSayWhatTheyHold) {
     std::string s = error_of(run("CONVERT", {Value::of(1), Value::of(2), Value::of_text("MPa")}));
     EXPECT_TRUE(has(s, "the argument from must be a unit such as \"psig\" or \"kJ/kg\"")) << s;
