@@ -199,8 +199,9 @@ int main(int argc, char** argv) {
     }
 
     std::vector<FileResult> results;
+    RunTimes times;
     try {
-        results = run_jobs(jobs, options);
+        results = run_jobs(jobs, options, times);
     } catch (const std::exception& e) {
         std::fprintf(stderr, "isentra-recalc: %s\n", e.what());
         return exit_failures;
@@ -236,6 +237,10 @@ int main(int argc, char** argv) {
                 ncases ? "runs" : (results.size() == 1 ? "file" : "files"), changed, changes,
                 changes == 1 ? "change" : "changes", failed, written.front().c_str());
     if (changes == 0 && failed == 0) std::printf("no changes: every formula result equals the stored one\n");
+    std::printf("time: %.2f s to start %d %s, %.2f s for the files\n", times.start_seconds,
+                std::max(1, std::min<int>(options.jobs, static_cast<int>(jobs.size()))),
+                std::min<int>(options.jobs, static_cast<int>(jobs.size())) > 1 ? "offices" : "office",
+                times.files_seconds);
     if (failed) return exit_failures;
     return changes ? exit_changes : exit_unchanged;
 }

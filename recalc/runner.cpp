@@ -31,7 +31,8 @@ namespace {
 
 // What the private profile adds to LibreOffice's defaults (registrymodifications.xcu items):
 // never recalculate on load (ODF and OOXML: the stored results are what we read first),
-// macros disabled outright, links never updated.
+// macros disabled outright, links never updated, no thumbnail picture in the copies
+// (rendering it is most of the time a small workbook takes to store).
 const char* const profile_items =
     "<item oor:path=\"/org.openoffice.Office.Calc/Formula/Load\"><prop oor:name=\"ODFRecalcMode\" oor:op=\"fuse\">"
     "<value>1</value></prop></item>\n"
@@ -42,7 +43,9 @@ const char* const profile_items =
     "<item oor:path=\"/org.openoffice.Office.Common/Security/Scripting\"><prop oor:name=\"DisableMacrosExecution\" "
     "oor:op=\"fuse\"><value>true</value></prop></item>\n"
     "<item oor:path=\"/org.openoffice.Office.Calc/Content/Update\"><prop oor:name=\"Link\" oor:op=\"fuse\">"
-    "<value>2</value></prop></item>\n";
+    "<value>2</value></prop></item>\n"
+    "<item oor:path=\"/org.openoffice.Office.Common/Save/Document\"><prop oor:name=\"GenerateThumbnail\" "
+    "oor:op=\"fuse\"><value>false</value></prop></item>\n";
 
 std::string file_url(const std::string& path) {
     std::string u = "file://";
@@ -263,7 +266,8 @@ FileResult run_one(Worker& w, const Job& job, const Options& options, std::uniqu
 
 }  // namespace
 
-std::vector<FileResult> run_jobs(const std::vector<Job>& jobs, const Options& options) {
+std::vector<FileResult> run_jobs(const std::vector<Job>& jobs, const Options& options, RunTimes& times) {
+    const auto t_start = Clock::now();
     std::vector<FileResult> results(jobs.size());
     if (jobs.empty()) return results;
     const int n = std::max(1, std::min<int>(options.jobs, static_cast<int>(jobs.size())));
@@ -292,6 +296,8 @@ std::vector<FileResult> run_jobs(const std::vector<Job>& jobs, const Options& op
         else if (first_error.empty()) first_error = w->start_error;
     }
     if (started == 0) throw std::runtime_error("no office could be started: " + first_error);
+    const auto t_files = Clock::now();
+    times.start_seconds = std::chrono::duration<double>(t_files - t_start).count();
 
     Progress progress(jobs.size(), options.progress);
     std::atomic<bool> done{false};
@@ -338,6 +344,7 @@ std::vector<FileResult> run_jobs(const std::vector<Job>& jobs, const Options& op
         });
     }
     for (auto& t : threads) t.join();
+    times.files_seconds = std::chrono::duration<double>(Clock::now() - t_files).count();
     done = true;
     monitor.join();
     progress.end();

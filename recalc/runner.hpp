@@ -22,8 +22,13 @@ struct Job {
     std::vector<Assignment> sets;
 };
 
+struct RunTimes {
+    double start_seconds = 0;  // starting the offices (in parallel)
+    double files_seconds = 0;  // from the first file to the last one done
+};
+
 // Runs every job; results in job order. Progress on stderr if `progress`.
 // Throws std::runtime_error if no office could be started at all.
-std::vector<FileResult> run_jobs(const std::vector<Job>& jobs, const Options& options);
+std::vector<FileResult> run_jobs(const std::vector<Job>& jobs, const Options& options, RunTimes& times);
 
 }  // namespace isentra::recalc

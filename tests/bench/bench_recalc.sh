@@ -64,29 +64,26 @@ for r in rows[1:]:
 print(n, s, c)
 PY
 }
-run() {  # jobs, input, output -> wall seconds
-  local t0 t1
+run() {  # jobs, input, output -> "wall start files" (seconds; start and files from the tool's time line)
+  local t0 t1 line
   t0=$(date +%s.%N)
-  "$TOOL" -q -j "$1" -o "$3" "$2" >/dev/null || true
+  line=$("$TOOL" -q -j "$1" -o "$3" "$2" | sed -n 's/^time: \([0-9.]*\) s to start .*, \([0-9.]*\) s for the files$/\1 \2/p')
   t1=$(date +%s.%N)
-  echo "$t1 - $t0" | bc -l
+  echo "$(echo "$t1 - $t0" | bc -l) $line"
 }
-t_one=$(run 1 "$one" "$W/one")
-t_j1=$(run 1 "$W/files/gen" "$W/j1")
-t_j2=$(run 2 "$W/files/gen" "$W/j2")
+read -r w_one st_one f_one < <(run 1 "$one" "$W/one")
+read -r w_j1 st_j1 f_j1 < <(run 1 "$W/files/gen" "$W/j1")
+read -r w_j2 st_j2 f_j2 < <(run 2 "$W/files/gen" "$W/j2")
 read -r n1 s1 c1 < <(figures "$W/j1/recalc-report.ods")
-read -r n0 s0 c0 < <(figures "$W/one/recalc-report.ods")
-/usr/bin/python3 - "$N" "$t_one" "$s0" "$t_j1" "$n1" "$s1" "$c1" "$t_j2" <<'PY'
+/usr/bin/python3 - "$N" "$n1" "$s1" "$c1" "$w_j1" "$st_j1" "$f_j1" "$w_j2" "$st_j2" "$f_j2" <<'PY'
 import sys
-n, t_one, s0, t_j1, n1, s1, c1, t_j2 = sys.argv[1:]
-n, n1 = int(n), int(n1)
-t_one, s0, t_j1, s1, c1, t_j2 = map(float, (t_one, s0, t_j1, s1, c1, t_j2))
-start = t_one - s0
-print(f"isentra-recalc, {n} one-sheet workbooks (40 formula cells each, 30 Isentra calls)")
-print(f"  office start (profile, extension, start, connect), from one file: {start:6.2f} s")
-print(f"  -j 1: {t_j1:6.2f} s wall, {t_j1 / n:5.3f} s per file; per file in the worker {s1 / n1:5.3f} s,")
+n, n1 = int(sys.argv[1]), int(sys.argv[2])
+s1, c1, w1, st1, f1, w2, st2, f2 = map(float, sys.argv[3:])
+print(f"isentra-recalc, {n} one-sheet workbooks (40 formula cells each, 30 Isentra calls), copies written")
+print(f"  office start (profile, extension, start, connect): {st1:5.2f} s for one office, {st2:5.2f} s for two in parallel")
+print(f"  -j 1: {w1:6.2f} s wall; files {f1:6.2f} s = {f1 / n:5.3f} s per file; in the worker {s1 / n1:5.3f} s per file,")
 print(f"        of which Calc's calculateAll {c1 / n1:5.3f} s: overhead beyond the recalculation "
       f"(copy, load, read, store) {(s1 - c1) / n1:5.3f} s per file (target <= 0.5 s)")
-print(f"  -j 2: {t_j2:6.2f} s wall, {t_j2 / n:5.3f} s per file; throughput -j 2 / -j 1 = {t_j1 / t_j2:4.2f}x "
-      f"(target >= 1.7x); without the start cost {(t_j1 - start) / max(t_j2 - start, 1e-9):4.2f}x")
+print(f"  -j 2: {w2:6.2f} s wall; files {f2:6.2f} s = {f2 / n:5.3f} s per file")
+print(f"  throughput -j 2 / -j 1, files: {f1 / f2:4.2f}x (target >= 1.7x); whole run with the start: {w1 / w2:4.2f}x")
 PY
