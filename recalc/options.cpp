@@ -308,7 +308,8 @@ Options:
   -h, --help              this text
       --version           the version
 
-Output: one summary line per file on standard output; in the output folder the
+Output: one summary line per file on standard output, a total and the time
+taken (starting the offices, the files); in the output folder the
 recalculated copies, recalc-report.ods (a summary sheet, then one row per change)
 and recalc-report.csv (one row per change), and with --cases cases.csv/.ods.
 A change is: a number that changed beyond the tolerances, a text that changed,
