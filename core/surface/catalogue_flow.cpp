@@ -12,6 +12,7 @@
 // SOLUTION (the solved reading) and BUDGET (the uncertainty budget). Method
 // names are the same words in camelCase. Names and methods are frozen once
 // released.
+#include <limits>
 #include <string>
 #include <utility>
 
@@ -84,11 +85,47 @@ Function make_row(const std::string& name, const std::string& method, std::strin
 
 // ---- Arguments ----------------------------------------------------------------------------
 
-Arg dp_arg() {
-    return Arg{"dp", Quantity::DifferentialPressure,
-               "Differential pressure across the meter (US: inches of water at 60 degF)"};
+// Ranges of the flow arguments (core units), checked by call() before the
+// numerics; the standards' own limits of use (D, d, beta, Re_D, p2/p1) are
+// checked in flow.cpp, where they depend on the device.
+Range bounds(double lo, bool lo_open, const char* lo_why, double hi, bool hi_open, const char* hi_why) {
+    Range r;
+    r.min = lo;
+    r.min_open = lo_open;
+    r.min_why = lo_why;
+    r.max = hi;
+    r.max_open = hi_open;
+    r.max_why = hi_why;
+    return r;
 }
-Arg m_arg() { return Arg{"m", Quantity::MassFlow, "Mass flow through the meter"}; }
+const double unbounded = std::numeric_limits<double>::quiet_NaN();
+Range dp_range() {
+    return bounds(0.0, true, "(the differential pressure across a meter is above 0)", 1e8, false,
+                  "(a sanity limit of 100 MPa, far above any meter's: check the units)");
+}
+Range diameter_range() {
+    return bounds(0.0, true, "(a diameter is above 0)", 10.0, false,
+                  "(a sanity limit of 10 m: check the units, e.g. mm given as m)");
+}
+Range expansion_range() {
+    return bounds(-1e-4, false, "(a linear expansion coefficient of a metal is about 1e-5 per kelvin)", 1e-4, false,
+                  "(a linear expansion coefficient of a metal is about 1e-5 per kelvin)");
+}
+Range fraction_range() {
+    return bounds(0.0, false, "(an uncertainty cannot be negative)", 0.1, false,
+                  "(an uncertainty as a fraction, e.g. 0.001 for 0.1 %, at most 0.1)");
+}
+Range beta_range() {
+    return bounds(0.0, true, "(beta = d/D lies between 0 and 1)", 1.0, true, "(beta = d/D lies between 0 and 1)");
+}
+Range reynolds_range() { return bounds(0.0, true, "(a Reynolds number is above 0)", unbounded, false, ""); }
+
+Arg dp_arg() {
+    return ranged(Arg{"dp", Quantity::DifferentialPressure,
+                      "Differential pressure across the meter (US: inches of water at 60 degF)"},
+                  dp_range());
+}
+Arg m_arg() { return ranged(Arg{"m", Quantity::MassFlow, "Mass flow through the meter"}, ranges::mass_flow(false)); }
 Arg p_arg() {
     return Arg{"p", Quantity::Pressure,
                "Static pressure at the upstream tapping (absolute unless a gauge unit)"};
@@ -98,30 +135,33 @@ Arg T_arg() {
                "Upstream temperature (subcooled water or superheated steam)"};
 }
 Arg d_arg() {
-    return Arg{"d", Quantity::Length,
-               "Bore (throat) diameter measured at T_ref (as is when alpha_d is 0)"};
+    return ranged(Arg{"d", Quantity::Length, "Bore (throat) diameter measured at T_ref (as is when alpha_d is 0)"},
+                  diameter_range());
 }
 Arg D_arg() {
-    return Arg{"D", Quantity::Length,
-               "Pipe inside diameter measured at T_ref (as is when alpha_D is 0)"};
+    return ranged(Arg{"D", Quantity::Length, "Pipe inside diameter measured at T_ref (as is when alpha_D is 0)"},
+                  diameter_range());
 }
 std::vector<Arg> expansion_args() {
-    return {Arg{"alpha_d", Quantity::LinearExpansion,
-                "Optional expansion coefficient of the bore's metal, e.g. 16.5e-6 1/K for stainless steel; default 0",
-                true, false, 0.0},
-            Arg{"alpha_D", Quantity::LinearExpansion,
-                "Optional expansion coefficient of the pipe, e.g. 12e-6 1/K for carbon steel; default 0",
-                true, false, 0.0},
+    return {ranged(Arg{"alpha_d", Quantity::LinearExpansion,
+                       "Optional expansion coefficient of the bore's metal, e.g. 16.5e-6 1/K (stainless); default 0",
+                       true, false, 0.0},
+                   expansion_range()),
+            ranged(Arg{"alpha_D", Quantity::LinearExpansion,
+                       "Optional expansion coefficient of the pipe, e.g. 12e-6 1/K (carbon steel); default 0", true,
+                       false, 0.0},
+                   expansion_range()),
             Arg{"T_ref", Quantity::Temperature,
                 "Optional temperature at which d and D were measured; default 20 degC", true, false, 293.15}};
 }
 std::vector<Arg> uncertainty_args() {
-    return {Arg{"u_dp", Quantity::None, "Uncertainty of dp as a fraction of the reading (0.0025 for 0.25 %; at most 0.1)"},
-            Arg{"u_p", Quantity::None,
-                "Uncertainty of p as a fraction of the reading (the gauge reading under a gauge unit); at most 0.1"},
-            Arg{"u_T", Quantity::TemperatureDifference, "Uncertainty of T"},
-            Arg{"u_d", Quantity::None, "Uncertainty of d as a fraction (0.0005 for 0.05 %)"},
-            Arg{"u_D", Quantity::None, "Uncertainty of D as a fraction (0.004 for 0.4 %)"}};
+    return {ranged(Arg{"u_dp", Quantity::None, "Uncertainty of dp as a fraction of the reading (0.0025 for 0.25 %)"},
+                   fraction_range()),
+            ranged(Arg{"u_p", Quantity::None, "Uncertainty of p as a fraction of the (gauge, under a gauge unit) reading"},
+                   fraction_range()),
+            ranged(Arg{"u_T", Quantity::TemperatureDifference, "Uncertainty of T"}, ranges::temperature_uncertainty()),
+            ranged(Arg{"u_d", Quantity::None, "Uncertainty of d as a fraction (0.0005 for 0.05 %)"}, fraction_range()),
+            ranged(Arg{"u_D", Quantity::None, "Uncertainty of D as a fraction (0.004 for 0.4 %)"}, fraction_range())};
 }
 
 std::vector<Arg> cat(std::vector<Arg> a, const std::vector<Arg>& b) {
@@ -285,9 +325,10 @@ void add_device(std::vector<Function>& out, const DeviceSpec& ds) {
         "Discharge coefficient C of " + std::string(ds.words) + " from beta, Re_D and D." +
             " From the diameter ratio beta = d/D, the pipe Reynolds number Re_D and the pipe diameter D, with the "
             "standard's limits of use checked." + ds.more,
-        {Arg{"beta", Quantity::None, "Diameter ratio d/D at the flowing temperature"},
-         Arg{"Re_D", Quantity::None, "Pipe Reynolds number 4 m/(pi mu D)"},
-         Arg{"D", Quantity::Length, "Pipe inside diameter at the flowing temperature"}, type},
+        {ranged(Arg{"beta", Quantity::None, "Diameter ratio d/D at the flowing temperature"}, beta_range()),
+         ranged(Arg{"Re_D", Quantity::None, "Pipe Reynolds number 4 m/(pi mu D)"}, reynolds_range()),
+         ranged(Arg{"D", Quantity::Length, "Pipe inside diameter at the flowing temperature"}, diameter_range()),
+         type},
         Quantity::None, [dev_of](const double* a, double* o, const units::UnitSpec&, const Extra& x) {
             o[0] = fl::discharge_coefficient(dev_of(x), a[0], a[1], a[2]);
         }));
@@ -300,7 +341,7 @@ void add_device(std::vector<Function>& out, const DeviceSpec& ds) {
                        "Expansibility factor eps of " + std::string(ds.words) + " at dp and the upstream p, T." +
                            " With Isentra's isentropic exponent at the upstream (p, T); 1 for water." + eps_eq +
                            " p2/p1 = 1 - dp/p must be at least 0.75.",
-                       {dp_arg(), p_arg(), T_arg(), Arg{"beta", Quantity::None, "Diameter ratio d/D"}},
+                       {dp_arg(), p_arg(), T_arg(), ranged(Arg{"beta", Quantity::None, "Diameter ratio d/D"}, beta_range())},
                        Quantity::None, [fam](const double* a, double* o, const units::UnitSpec&, const Extra&) {
                            o[0] = fl::expansibility_pT(fam, a[3], a[0], a[1], a[2]);
                        }));
@@ -336,8 +377,9 @@ void add_calibrated(std::vector<Function>& out) {
                 false, false, std::nan(""), true};
     const Arg kind{"kind", Quantity::Text,
                    "For the expansibility: \"orifice\", \"nozzle\" or \"venturi\" (venturi nozzle or tube)"};
-    const Arg u_C{"u_C", Quantity::None,
-                  "Uncertainty of the calibrated C as a fraction, from its certificate (0.003 for 0.3 %)"};
+    const Arg u_C = ranged(Arg{"u_C", Quantity::None,
+                               "Uncertainty of the calibrated C as a fraction, from its certificate (0.003 for 0.3 %)"},
+                           fraction_range());
     const std::string when =
         " Use it for a calibrated flow section (the usual test-grade nozzle or orifice of an acceptance test) or "
         "a device outside the standard's geometry: the calibration then replaces the standard's discharge "
