@@ -60,13 +60,15 @@ std::string file_url(const std::string& path) {
     return u;
 }
 
-void copy_file_new(const std::string& from, const std::string& to) {
-    std::ifstream in(from, std::ios::binary);
-    if (!in) throw std::runtime_error("cannot read " + from);
+std::string read_whole(const std::string& path) {
+    std::ifstream in(path, std::ios::binary);
+    if (!in) throw std::runtime_error("cannot read " + path);
     std::ostringstream s;
     s << in.rdbuf();
-    write_new_file(to, s.str());
+    return s.str();
 }
+
+void copy_file_new(const std::string& from, const std::string& to) { write_new_file(to, read_whole(from)); }
 
 struct Worker {
     int index = 0;
@@ -206,7 +208,21 @@ FileResult run_one(Worker& w, const Job& job, const Options& options, std::uniqu
         for (const CellAddress& a : options.collect) r.collected.push_back(read_cell(doc, a));
         if (!job.copy_path.empty()) {
             store_copy(doc, file_url(private_out), job.copy_extension);
-            copy_file_new(private_out, job.copy_path);
+            // The copy must be a whole package before it is handed out (a member every such
+            // package has is read back through the central directory).
+            const std::string data = read_whole(private_out);
+            const char* member = job.copy_extension == "xlsx" || job.copy_extension == "xlsm" ? "[Content_Types].xml"
+                                 : job.copy_extension == "fods"                               ? nullptr
+                                                                                              : "content.xml";
+            if (member) {
+                try {
+                    zip_member(data, member);
+                } catch (const std::exception& e) {
+                    throw DocumentError(std::string("the office wrote an incomplete recalculated copy (") + e.what() +
+                                        "); nothing was written to the output folder");
+                }
+            }
+            write_new_file(job.copy_path, data);
             r.copy = job.copy_path;
         }
         close_document(doc);

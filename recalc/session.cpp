@@ -310,10 +310,8 @@ Value read_cell(const Reference<css::lang::XComponent>& doc, const CellAddress& 
 void store_copy(const Reference<css::lang::XComponent>& doc, const std::string& file_url, const std::string& extension) {
     const char* filter = filter_for(extension);
     if (!filter) throw DocumentError("no filter for ." + extension);
-    // NoFileSync: the copy is a private intermediate file (the tool copies it to the output
-    // folder), so no fsync per file.
     Sequence<css::beans::PropertyValue> props = props_of({prop("FilterName", Any(OUString::createFromAscii(filter))),
-                                                          prop("Overwrite", Any(false)), prop("NoFileSync", Any(true))});
+                                                          prop("Overwrite", Any(false))});
     try {
         Reference<css::frame::XStorable>(doc, UNO_QUERY_THROW)->storeToURL(ou(file_url), props);
     } catch (const css::uno::RuntimeException&) {
