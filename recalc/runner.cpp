@@ -15,6 +15,7 @@
 #include <thread>
 #include <unistd.h>
 
+#include <com/sun/star/lang/DisposedException.hpp>
 #include <com/sun/star/uno/Exception.hpp>
 #include <com/sun/star/uno/RuntimeException.hpp>
 
@@ -159,6 +160,33 @@ FileResult run_one(Worker& w, const Job& job, const Options& options, std::uniqu
     const std::string private_out = office.writable_dir() + "/out-" + std::to_string(serial) + "." + job.copy_extension;
     css::uno::Reference<css::lang::XComponent> doc;
     bool restart = false;
+    // A UNO error. A broken bridge (DisposedException): the office died or is unusable; its
+    // process may take a moment to exit after the bridge noticed.
+    auto uno_failure = [&](const std::string& what, bool disposed) {
+        r.failed = true;
+        if (!disposed && !w.timed_out) {  // is the bridge still usable? (one cheap remote call)
+            try {
+                office.context()->getServiceManager();
+            } catch (...) {
+                disposed = true;
+            }
+        }
+        for (int i = 0; disposed && !w.timed_out && i < 30 && office.alive(); ++i)
+            std::this_thread::sleep_for(std::chrono::milliseconds(100));
+        if (w.timed_out) {
+            r.reason = "time limit of " + format_number(options.timeout_s) +
+                       " s exceeded (the office was stopped and restarted)";
+            restart = true;
+        } else if (!office.alive()) {
+            r.reason = "the office crashed on this file (it was restarted)";
+            restart = true;
+        } else if (disposed) {
+            r.reason = "the connection to the office broke on this file (it was restarted)";
+            restart = true;
+        } else {
+            r.reason = "LibreOffice reported an error: " + what;
+        }
+    };
     try {
         // The office reads a private copy: the original is never opened by it, locked or written.
         copy_file_new(job.input, private_in);
@@ -230,18 +258,10 @@ FileResult run_one(Worker& w, const Job& job, const Options& options, std::uniqu
     } catch (const DocumentError& e) {
         r.failed = true;
         r.reason = e.what();
+    } catch (const css::lang::DisposedException& e) {
+        uno_failure(describe(e), true);
     } catch (const css::uno::Exception& e) {
-        r.failed = true;
-        if (w.timed_out) {
-            r.reason = "time limit of " + format_number(options.timeout_s) +
-                       " s exceeded (the office was stopped and restarted)";
-            restart = true;
-        } else if (!office.alive()) {
-            r.reason = "the office crashed on this file (it was restarted)";
-            restart = true;
-        } else {
-            r.reason = "LibreOffice reported an error: " + describe(e);
-        }
+        uno_failure(describe(e), false);
     } catch (const std::exception& e) {
         r.failed = true;
         r.reason = e.what();
