@@ -153,7 +153,9 @@ std::vector<Bad> bad_values(const cat::Function& f, std::size_t i, const Case& c
     int numeric = 0;
     for (const Arg& a : c.args) numeric += a.is_text ? 0 : 1;
     if (numeric >= 2) v.push_back(Bad::WrongShape);
-    if (f.kind == cat::ResultKind::Number && f.name != "STEAM.EXPLAIN") v.push_back(Bad::Square);
+    // A whole-range argument (a calibration table) is not broadcast: no 2x2 comparison.
+    if (f.kind == cat::ResultKind::Number && f.name != "STEAM.EXPLAIN" && !(i < f.args.size() && f.args[i].whole_range))
+        v.push_back(Bad::Square);
     return v;
 }
 
