@@ -150,9 +150,13 @@ std::vector<Bad> bad_values(const cat::Function& f, std::size_t i, const Case& c
         return {Bad::Text, Bad::Blank, Bad::ErrorCell, Bad::Zero, Bad::MinusOne, Bad::Huge, Bad::Denormal, Bad::Two};
     std::vector<Bad> v = {Bad::Text, Bad::Blank, Bad::ErrorCell, Bad::Zero, Bad::MinusOne,
                           Bad::Huge, Bad::MinusHuge, Bad::Denormal};
+    // Wrong shape: this argument a 1x3 range, another broadcast one a 1x2 range.
+    auto broadcast = [&](std::size_t k) {
+        return !c.args[k].is_text && !(k < f.args.size() && (f.args[k].whole_range || is_header(f, k)));
+    };
     int numeric = 0;
-    for (const Arg& a : c.args) numeric += a.is_text ? 0 : 1;
-    if (numeric >= 2) v.push_back(Bad::WrongShape);
+    for (std::size_t k = 0; k < c.args.size(); ++k) numeric += broadcast(k) ? 1 : 0;
+    if (broadcast(i) && numeric >= 2) v.push_back(Bad::WrongShape);
     // A whole-range argument (a calibration table) is not broadcast: no 2x2 comparison.
     if (f.kind == cat::ResultKind::Number && f.name != "STEAM.EXPLAIN" && !(i < f.args.size() && f.args[i].whole_range))
         v.push_back(Bad::Square);
@@ -276,7 +280,9 @@ TEST_F(SweepTest, EveryArgumentOfEveryFunctionWithBadValues) {
                 }
                 if (b == Bad::WrongShape) {  // the first other numeric argument becomes a 1x2 range
                     for (std::size_t k = 0; k < base.args.size(); ++k) {
-                        if (k == i || base.args[k].is_text) continue;
+                        if (k == i || base.args[k].is_text || (k < f.args.size() && (f.args[k].whole_range ||
+                                                                                     is_header(f, k))))
+                            continue;
                         for (int q = 0; q < 2; ++q) number(addr(kShapeCol + 3 + q, r), base.args[k].number);
                         refs[k] = addr(kShapeCol + 3, r) + ":" + addr(kShapeCol + 4, r);
                         break;
