@@ -297,6 +297,13 @@ Range efficiency() {
     return make(0.0, true, "(an efficiency is a fraction above 0, e.g. 0.85 for 85 %)", 1.0, false,
                 "(an efficiency is a fraction, e.g. 0.85 for 85 %, not a percentage)");
 }
+// The Baumann coefficient: above 0 (0 would be no correction at all, and a
+// blank cell counts as 0) up to 3, a sanity limit (the usual value is 1,
+// common practice).
+Range baumann_coefficient() {
+    return make(0.0, true, "(the Baumann coefficient is above 0, usually 1)", 3.0, false,
+                "(a sanity limit: the usual value is 1)");
+}
 Range mass_flow(bool zero_ok) {
     return make(0.0, !zero_ok,
                 zero_ok ? "(a mass flow cannot be negative)" : "(the flow must be above 0 for a result to mean anything)",

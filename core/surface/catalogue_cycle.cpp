@@ -155,8 +155,9 @@ void add_wet_exhaust(std::vector<Function>& out) {
                                     p_arg("p_out", "Exhaust pressure (e.g. the condenser pressure)"),
                                     frac_arg("eta_dry", "Dry-steam section efficiency as a fraction above 0 to 1 "
                                                         "(0.90 for 90 %)"),
-                                    frac_arg("a", "Baumann coefficient: efficiency fraction lost per unit of mean "
-                                                  "moisture (about 1)")};
+                                    ranged(frac_arg("a", "Baumann coefficient: efficiency fraction lost per unit "
+                                                         "of mean moisture (about 1)"),
+                                           ranges::baumann_coefficient())};
         };
         auto with_loss = [&]() {
             std::vector<Arg> v = base();

@@ -44,6 +44,7 @@ Range mass_flow(bool zero_ok);       // [0 or (0, 1e5] kg/s
 Range power(bool zero_ok);           // [0 or (0, 1e7] kW
 Range relative_uncertainty();        // [0, 0.1]: a fraction of the reading
 Range temperature_uncertainty();     // [0, 10] K
+Range baumann_coefficient();         // (0, 3]: usually 1 (common practice)
 // The range of a state input by its quantity: absolute_pressure, temperature,
 // enthalpy or entropy (no bounds for other quantities).
 Range for_quantity(Quantity q);

@@ -97,18 +97,6 @@ Arg h_arg(const char* n, const char* d) { return ranged(Arg{n, Quantity::Specifi
 Arg T_arg(const char* n, const char* d) { return ranged(Arg{n, Quantity::Temperature, d}, ranges::temperature()); }
 Arg eta_arg(const char* n, const char* d) { return ranged(Arg{n, Quantity::None, d}, ranges::efficiency()); }
 
-// The Baumann coefficient: above 0 (0 would be no correction at all, and a
-// blank cell counts as 0) up to 3, a sanity limit (the usual value is 1).
-Range baumann_range() {
-    Range r;
-    r.min = 0.0;
-    r.min_open = true;
-    r.min_why = "(the Baumann coefficient is above 0, usually 1; leave the argument out for 1)";
-    r.max = 3.0;
-    r.max_why = "(a sanity limit: the usual value is 1)";
-    return r;
-}
-
 // The outlet has no vapour quality: at or above the critical pressure, or
 // below the triple-point pressure (no liquid phase). A RangeError on p_out so
 // that the sentence is in the user's units.
@@ -319,7 +307,7 @@ void add_section_efficiency(std::vector<Function>& out) {
                        "Optional Baumann coefficient: efficiency fraction lost per unit of mean moisture; default 1, "
                        "the usual value",
                        true, false, 1.0},
-                   baumann_range())};
+                   ranges::baumann_coefficient())};
     };
     out.push_back(number("STEAM.BAUMANN.WET", "baumannWet", cat_turbine,
                          "Efficiency of a stage or section working in wet steam from its dry-steam efficiency." +

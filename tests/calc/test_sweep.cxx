@@ -85,12 +85,6 @@ double bad_number(Bad b) {
     }
 }
 
-// Whether argument i of f can take the value v (core units).
-bool accepts(const cat::Function& f, std::size_t i, double v) {
-    (void)f; (void)i; (void)v;
-    return true;
-}
-
 // What the rules demand of a case.
 enum class Expect {
     Error,   // no number: an error value (or every element of a row an error)
@@ -135,7 +129,7 @@ Expect rules(const cat::Function& f, std::size_t i, Bad b) {
             if (i >= f.args.size()) return Expect::Either;
             const double v = b == Bad::Blank ? 0.0 : bad_number(b);
             const double core = units::UnitSpec::parse("SI").to_core(f.args[i].quantity, v);
-            return accepts(f, i, core) ? Expect::Either : Expect::Error;
+            return cat::arg_accepts(f, i, core) ? Expect::Either : Expect::Error;
         }
     }
     return Expect::Either;
