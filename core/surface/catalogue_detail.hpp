@@ -4,6 +4,7 @@
 #pragma once
 
 #include <string>
+#include <utility>
 #include <vector>
 
 #include "isentra/surface/catalogue.hpp"
@@ -52,5 +53,15 @@ Range for_quantity(Quantity q);
 
 // a with range r.
 Arg ranged(Arg a, Range r);
+
+// Building blocks of the equipment families (catalogue_family.cpp).
+// The optional header flag of a row function.
+Arg header_arg();
+// A function with one number per state; the units argument is appended.
+Function number(const char* name, const char* method, const char* category, std::string summary,
+                std::vector<Arg> args, Quantity result, Eval eval);
+// A function with a row per state; the units argument and the header flag are appended.
+Function row(const char* name, const char* method, const char* category, std::string summary,
+             std::vector<Arg> args, std::vector<std::pair<const char*, Quantity>> columns, Eval eval);
 
 }  // namespace isentra::catalogue::detail

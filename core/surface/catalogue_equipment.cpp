@@ -31,50 +31,12 @@ const char* const cat_turbine = "Steam turbines";
 const char* const cat_equipment = "Steam plant equipment";
 const char* const cat_performance = "Steam plant performance";
 
-Arg header_arg() {
-    return Arg{"header", Quantity::None,
-               "Optional: 1 (or TRUE) puts a row of names and units above the values; default 0", true};
-}
 
 // The barometric pressure (MPa) when the units give pressures as gauge
 // readings, else 0: uncertainties "as a fraction of the reading" then refer to
 // the gauge reading the instrument shows.
 double gauge_patm(const units::UnitSpec& spec) {
     return spec.is_gauge(Quantity::Pressure) ? spec.patm_MPa() : 0.0;
-}
-
-Function number(const char* name, const char* method, const char* category, std::string summary,
-                std::vector<Arg> args, Quantity result, Eval eval) {
-    Function f;
-    f.name = name;
-    f.method = method;
-    f.category = category;
-    f.summary = std::move(summary);
-    f.args = std::move(args);
-    f.args.push_back(units_arg());
-    f.result = result;
-    f.kind = ResultKind::Number;
-    f.eval = std::move(eval);
-    return f;
-}
-
-Function row(const char* name, const char* method, const char* category, std::string summary,
-             std::vector<Arg> args, std::vector<std::pair<const char*, Quantity>> columns, Eval eval) {
-    Function f;
-    f.name = name;
-    f.method = method;
-    f.category = category;
-    f.summary = std::move(summary);
-    f.args = std::move(args);
-    f.args.push_back(units_arg());
-    f.args.push_back(header_arg());
-    f.kind = ResultKind::Row;
-    for (const auto& c : columns) {
-        f.row_names.emplace_back(c.first);
-        f.row_quantities.push_back(c.second);
-    }
-    f.eval = std::move(eval);
-    return f;
 }
 
 // ---- Argument texts ------------------------------------------------------------------
