@@ -355,9 +355,13 @@ void check_calibration(const Calibration& cal) {
         throw Error(ErrorCode::InvalidArgument,
                     "the calibration needs a discharge coefficient, or pairs of Reynolds number and coefficient");
     for (std::size_t i = 0; i < cal.C.size(); ++i) {
-        if (!(std::isfinite(cal.C[i]) && cal.C[i] > 0 && cal.C[i] <= 1.2))
-            throw RangeError("C", Quantity::None, cal.C[i], 0.0, 1.2,
-                             "(a discharge coefficient of the calibration, row " + std::to_string(i + 1) + ")");
+        // Sanity limits (common practice): the discharge coefficients of
+        // differential-pressure meters lie between about 0.6 (orifice plates)
+        // and 1 (nozzles, venturi tubes).
+        if (!(std::isfinite(cal.C[i]) && cal.C[i] >= 0.3 && cal.C[i] <= 1.2))
+            throw RangeError("C", Quantity::None, cal.C[i], 0.3, 1.2,
+                             "(a discharge coefficient of the calibration, row " + std::to_string(i + 1) +
+                                 ": those of differential-pressure meters lie between about 0.6 and 1)");
         if (cal.C.size() == 1) break;
         if (!finite_positive(cal.Re[i]))
             throw RangeError("Re_D", Quantity::None, cal.Re[i], 0.0, nan_v,

@@ -98,7 +98,6 @@ Range bounds(double lo, bool lo_open, const char* lo_why, double hi, bool hi_ope
     r.max_why = hi_why;
     return r;
 }
-const double unbounded = std::numeric_limits<double>::quiet_NaN();
 Range dp_range() {
     return bounds(0.0, true, "(the differential pressure across a meter is above 0)", 1e8, false,
                   "(a sanity limit of 100 MPa, far above any meter's: check the units)");
@@ -118,7 +117,10 @@ Range fraction_range() {
 Range beta_range() {
     return bounds(0.0, true, "(beta = d/D lies between 0 and 1)", 1.0, true, "(beta = d/D lies between 0 and 1)");
 }
-Range reynolds_range() { return bounds(0.0, true, "(a Reynolds number is above 0)", unbounded, false, ""); }
+Range reynolds_range() {
+    return bounds(0.0, true, "(a Reynolds number is above 0)", 1e10, false,
+                  "(a sanity limit far above any pipe flow's Reynolds number)");
+}
 
 Arg dp_arg() {
     return ranged(Arg{"dp", Quantity::DifferentialPressure,

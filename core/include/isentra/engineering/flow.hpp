@@ -64,7 +64,7 @@ struct Calibration {
     std::vector<double> Re, C;
     bool empty() const { return C.empty(); }
 };
-// Checks the table (sizes, finite values, 0 < C <= 1.2, Re increasing).
+// Checks the table (sizes, finite values, 0.3 <= C <= 1.2, Re increasing).
 void check_calibration(const Calibration& cal);
 double calibrated_C(const Calibration& cal, double Re_D);
 
