@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <cctype>
 #include <cerrno>
+#include <csignal>
 #include <cstdio>
 #include <cstring>
 #include <ctime>
@@ -109,6 +110,8 @@ std::string read_text(const std::string& path) {
 }  // namespace
 
 int main(int argc, char** argv) {
+    // A write to the socket of an office that has just died must give an error, not end the tool.
+    std::signal(SIGPIPE, SIG_IGN);
     Options options;
     std::vector<Input> inputs;
     CaseTable cases;

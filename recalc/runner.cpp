@@ -2,6 +2,7 @@
 #include "runner.hpp"
 
 #include <atomic>
+#include <csignal>
 #include <chrono>
 #include <cstdio>
 #include <cstdlib>
@@ -139,6 +140,14 @@ private:
     std::size_t total_, done_ = 0, failed_ = 0;
     bool on_, drawn_ = false;
 };
+
+// Ctrl-C (SIGINT) or SIGTERM: the files being recalculated finish, the others are
+// reported as not run, the report is written. A second signal ends the program at once.
+std::atomic<bool> interrupted{false};
+extern "C" void on_interrupt(int sig) {
+    interrupted = true;
+    std::signal(sig, SIG_DFL);
+}
 
 // Hidden test hooks (documented in docs/recalc.md): the office is stopped
 // (SIGSTOP: a hang) or killed (a crash) just before it loads a file of this name.
@@ -336,6 +345,8 @@ std::vector<FileResult> run_jobs(const std::vector<Job>& jobs, const Options& op
     times.start_seconds = std::chrono::duration<double>(t_files - t_start).count();
 
     Progress progress(jobs.size(), options.progress);
+    std::signal(SIGINT, on_interrupt);
+    std::signal(SIGTERM, on_interrupt);
     std::atomic<bool> done{false};
     std::thread monitor([&] {
         while (!done) {
@@ -361,7 +372,13 @@ std::vector<FileResult> run_jobs(const std::vector<Job>& jobs, const Options& op
                 const std::size_t k = next++;
                 if (k >= jobs.size()) break;
                 FileResult r;
-                if (!w->start_error.empty() && !w->office->alive()) {
+                if (interrupted) {
+                    r.input = jobs[k].input;
+                    r.name = jobs[k].name;
+                    r.case_number = jobs[k].case_number;
+                    r.failed = true;
+                    r.reason = "not recalculated: the run was interrupted";
+                } else if (!w->start_error.empty() && !w->office->alive()) {
                     r.input = jobs[k].input;
                     r.name = jobs[k].name;
                     r.case_number = jobs[k].case_number;
