@@ -369,6 +369,18 @@ std::vector<FileResult> run_jobs(const std::vector<Job>& jobs, const Options& op
         threads.emplace_back([&, w = wp.get()] {
             std::unique_ptr<FunctionNames> names;
             while (true) {
+                // An office that could not be restarted gets one more try; if that fails too,
+                // this worker stops and the other offices take the remaining files.
+                if (!w->start_error.empty() && !w->office->alive()) {
+                    std::lock_guard<std::mutex> lock(w->mutex);
+                    try {
+                        w->office->restart();
+                        w->start_error.clear();
+                    } catch (const std::exception& e) {
+                        w->start_error = e.what();
+                        break;
+                    }
+                }
                 const std::size_t k = next++;
                 if (k >= jobs.size()) break;
                 FileResult r;
@@ -378,12 +390,6 @@ std::vector<FileResult> run_jobs(const std::vector<Job>& jobs, const Options& op
                     r.case_number = jobs[k].case_number;
                     r.failed = true;
                     r.reason = "not recalculated: the run was interrupted";
-                } else if (!w->start_error.empty() && !w->office->alive()) {
-                    r.input = jobs[k].input;
-                    r.name = jobs[k].name;
-                    r.case_number = jobs[k].case_number;
-                    r.failed = true;
-                    r.reason = "the office could not be restarted: " + w->start_error;
                 } else {
                     r = run_one(*w, jobs[k], options, names, k);
                 }
@@ -397,6 +403,19 @@ std::vector<FileResult> run_jobs(const std::vector<Job>& jobs, const Options& op
         });
     }
     for (auto& t : threads) t.join();
+    // Files no office was left for (every office failed to restart).
+    std::string why;
+    for (auto& w : workers)
+        if (!w->start_error.empty()) why = w->start_error;
+    for (std::size_t k = std::min(next.load(), jobs.size()); k < jobs.size(); ++k) {
+        FileResult& r = results[k];
+        r.input = jobs[k].input;
+        r.name = jobs[k].name;
+        r.case_number = jobs[k].case_number;
+        r.failed = true;
+        r.reason = "not recalculated: no office could be restarted (" + why + ")";
+        progress.finished(r);
+    }
     times.files_seconds = std::chrono::duration<double>(Clock::now() - t_files).count();
     done = true;
     monitor.join();
