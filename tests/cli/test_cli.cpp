@@ -20,14 +20,15 @@
 #include "isentra/surface/catalogue.hpp"
 #include "isentra/units/units.hpp"
 #include "cli_run.hpp"
+#include "text_check.hpp"
 
 namespace {
 
 using isentra::clitest::Outcome;
+using isentra::clitest::contains;
 using isentra::clitest::run;
 
 bool starts_with(const std::string& s, const std::string& p) { return s.rfind(p, 0) == 0; }
-bool contains(const std::string& s, const std::string& p) { return s.find(p) != std::string::npos; }
 
 // Significant digits of a number printed with %.17g (trailing zeros are not printed).
 int significant_digits(const std::string& s) {

@@ -16,14 +16,17 @@
 #include <vector>
 
 #include "cli_run.hpp"
+#include "text_check.hpp"
 
 namespace {
 
 using isentra::clitest::Outcome;
+using isentra::clitest::contains;
+using isentra::clitest::expect_same;
+using isentra::clitest::parse;
 using isentra::clitest::read_file;
 using isentra::clitest::run;
-
-bool contains(const std::string& s, const std::string& p) { return s.find(p) != std::string::npos; }
+using isentra::clitest::split;
 
 // A temporary file name (the file is removed at the end of the test).
 struct TempFile {
@@ -42,26 +45,6 @@ struct TempFile {
     ~TempFile() { std::remove(path.c_str()); }
 };
 
-// Splits a CSV line (no quotes) at `delim`.
-std::vector<std::string> split(const std::string& line, char delim = ',') {
-    std::vector<std::string> f(1);
-    for (char c : line) {
-        if (c == delim) f.emplace_back();
-        else f.back() += c;
-    }
-    return f;
-}
-
-double parse(std::string s, char decimal = '.') {
-    if (decimal != '.')
-        for (char& c : s)
-            if (c == decimal) c = '.';
-    double v = 0;
-    const auto r = std::from_chars(s.data(), s.data() + s.size(), v);
-    EXPECT_TRUE(r.ec == std::errc() && r.ptr == s.data() + s.size()) << "not a number: \"" << s << "\"";
-    return v;
-}
-
 // The line-by-line answers of the calls (one per element).
 std::vector<std::string> line_mode(const std::vector<std::string>& calls) {
     std::string in;
@@ -72,10 +55,6 @@ std::vector<std::string> line_mode(const std::vector<std::string>& calls) {
 }
 
 // Bit-identical doubles (NaN never expected here).
-void expect_same(double a, double b, const std::string& what) {
-    EXPECT_EQ(std::memcmp(&a, &b, sizeof a), 0) << what << ": " << a << " vs " << b;
-}
-
 }  // namespace
 
 TEST(CliCsv, NewColumnsMatchTheLineMode) {

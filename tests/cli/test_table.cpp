@@ -11,31 +11,18 @@
 #include <vector>
 
 #include "cli_run.hpp"
+#include "text_check.hpp"
 #include "isentra/surface/call.hpp"
 #include "isentra/surface/catalogue.hpp"
 
 namespace {
 
 using isentra::clitest::Outcome;
+using isentra::clitest::contains;
+using isentra::clitest::expect_same;
+using isentra::clitest::parse;
 using isentra::clitest::run;
-
-bool contains(const std::string& s, const std::string& p) { return s.find(p) != std::string::npos; }
-
-std::vector<std::string> split(const std::string& line, char delim = ',') {
-    std::vector<std::string> f(1);
-    for (char c : line) {
-        if (c == delim) f.emplace_back();
-        else f.back() += c;
-    }
-    return f;
-}
-
-double parse(const std::string& s) {
-    double v = 0;
-    const auto r = std::from_chars(s.data(), s.data() + s.size(), v);
-    EXPECT_TRUE(r.ec == std::errc() && r.ptr == s.data() + s.size()) << "not a number: \"" << s << "\"";
-    return v;
-}
+using isentra::clitest::split;
 
 // The cell function NAME(args...; units) as Calc would compute it.
 double cell(const std::string& name, const std::vector<double>& args, const std::string& units = "") {
@@ -47,10 +34,6 @@ double cell(const std::string& name, const std::vector<double>& args, const std:
     const isentra::Value v = isentra::call_scalar(*f, a);
     EXPECT_EQ(v.kind, isentra::Value::Kind::Number) << name << ": " << v.text;
     return v.number;
-}
-
-void expect_same(double a, double b, const std::string& what) {
-    EXPECT_EQ(std::memcmp(&a, &b, sizeof a), 0) << what << ": " << a << " vs " << b;
 }
 
 struct Csv {
