@@ -16,35 +16,15 @@
 #include "isentra/engineering/equipment.hpp"
 #include "isentra/properties/state.hpp"
 
+#include "engineering_detail.hpp"
+
 namespace isentra::cycle {
 
 namespace {
 
 using if97::pc;
 
-constexpr double nan_v = std::numeric_limits<double>::quiet_NaN();
-constexpr double none = nan_v;  // "no bound" in a RangeError
-
-std::string num(double v) {
-    char buf[40];
-    if (v == 0) v = 0;
-    std::snprintf(buf, sizeof buf, "%.6g", v);
-    return buf;
-}
-
-void check_finite(const char* name, Quantity q, double v) {
-    if (!std::isfinite(v)) throw RangeError(name, q, v, none, none);
-}
-
-void check_nonneg(const char* name, Quantity q, double v, const char* context) {
-    check_finite(name, q, v);
-    if (v < 0) throw RangeError(name, q, v, 0.0, none, context);
-}
-
-void check_positive(const char* name, Quantity q, double v, const char* context) {
-    check_finite(name, q, v);
-    if (!(v > 0)) throw RangeError(name, q, v, 0.0, none, context);
-}
+using namespace engineering::detail;
 
 // Re-throws a state solver's RangeError on "p"/"T"/"h" under the caller's names.
 [[noreturn]] void rename(const RangeError& e, const char* p, const char* T, const char* h) {
@@ -68,14 +48,6 @@ State pT(double p, double T, const char* pn, const char* Tn) {
         return state_pT(p, T);
     } catch (const RangeError& e) {
         rename(e, pn, Tn, nullptr);
-    }
-}
-
-double quality_or_nan(const State& st) {
-    try {
-        return quality(st);
-    } catch (const Error&) {
-        return nan_v;
     }
 }
 
@@ -298,23 +270,9 @@ DrainPump pumped_drain(double m_fw, double p_fw, double h_fw_in, double h_fw_mid
     if (frac < 0 || frac > 1)
         throw RangeError("frac", Quantity::None, frac, 0.0, 1.0,
                          "(the fraction of the drain pumped forward: 1 all of it, 0 none, the plain cascade)");
-    if (h_fw_mid < h_fw_in)
-        throw RangeError("h_fw_mid", Quantity::SpecificEnergy, h_fw_mid, h_fw_in, none,
-                         "(the feedwater inlet enthalpy h_fw_in: a heater does not cool the feedwater)",
-                         ErrorCode::Impossible);
-    if (h_fw_out < h_fw_mid)
-        throw RangeError("h_fw_out", Quantity::SpecificEnergy, h_fw_out, h_fw_mid, none,
-                         "(the enthalpy h_fw_mid leaving the lower heater: a heater does not cool the feedwater)",
-                         ErrorCode::Impossible);
-    if (h_drain < h_fw_in)
-        throw RangeError("h_drain", Quantity::SpecificEnergy, h_drain, h_fw_in, none,
-                         "(the feedwater inlet enthalpy h_fw_in: the drain cannot leave colder than the coldest "
-                         "water it meets)",
-                         ErrorCode::Impossible);
-    if (!(h_ext > h_drain))
-        throw RangeError("h_ext", Quantity::SpecificEnergy, h_ext, h_drain, none,
-                         "(the drain enthalpy h_drain: the extraction steam must bring more enthalpy than the "
-                         "drain takes away)");
+    check_heated("h_fw_mid", h_fw_mid, h_fw_in, "the feedwater inlet enthalpy h_fw_in");
+    check_heated("h_fw_out", h_fw_out, h_fw_mid, "the enthalpy h_fw_mid leaving the lower heater");
+    check_drain_and_extraction(h_fw_in, h_drain, h_ext);
     check_nonneg("dca_up", Quantity::TemperatureDifference, dca_up,
                  "(the drain cooler approach cannot be negative)");
     const double Ts_up = tsat_of(p_shell_up, "p_shell_up");

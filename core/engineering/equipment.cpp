@@ -13,6 +13,8 @@
 #include "isentra/base/error.hpp"
 #include "isentra/properties/state.hpp"
 
+#include "engineering_detail.hpp"
+
 namespace isentra::equipment {
 
 namespace {
@@ -20,25 +22,9 @@ namespace {
 using if97::pc;
 using if97::Tc;
 
-constexpr double nan_v = std::numeric_limits<double>::quiet_NaN();
-constexpr double none = nan_v;            // "no bound" in a RangeError
+using namespace engineering::detail;
+
 constexpr double p_wet_min = 611.213e-6;  // MPa, psat(273.15 K): below it IF97 has no liquid
-
-std::string num(double v) {
-    char buf[40];
-    if (v == 0) v = 0;  // no "-0"
-    std::snprintf(buf, sizeof buf, "%.6g", v);
-    return buf;
-}
-
-void check_finite(const char* name, Quantity q, double v) {
-    if (!std::isfinite(v)) throw RangeError(name, q, v, none, none);
-}
-
-void check_nonneg(const char* name, Quantity q, double v, const char* context) {
-    check_finite(name, q, v);
-    if (v < 0) throw RangeError(name, q, v, 0.0, none, context);
-}
 
 void check_T(const char* name, double T) {
     check_finite(name, Quantity::Temperature, T);
@@ -97,17 +83,6 @@ State ps(double p, double s, const Names& n) {
     }
 }
 
-// Vapour quality: x inside the wet region; outside it, below the critical
-// pressure, the equilibrium quality (h - h')/(h'' - h') at the state's
-// pressure (as quality() gives it, but also for steam hotter than Tc, e.g. a
-// high-pressure turbine exhaust); NaN at or above the critical pressure.
-double quality_or_nan(const State& st) {
-    try {
-        return quality(st);
-    } catch (const Error&) {
-        return nan_v;
-    }
-}
 
 // True if a (p,T) reading is on or inside the wet region (or, below the
 // critical pressure, subcooled): T <= Tsat(p). p must be a valid pressure.
@@ -613,19 +588,8 @@ double fwh_extraction_flow(double m_fw, double h_fw_in, double h_fw_out, double 
     check_finite("h_drain", Quantity::SpecificEnergy, h_drain);
     check_nonneg("m_casc", Quantity::MassFlow, m_casc, "(a mass flow cannot be negative; 0 without cascading drains)");
     check_finite("h_casc", Quantity::SpecificEnergy, h_casc);
-    if (h_fw_out < h_fw_in)
-        throw RangeError("h_fw_out", Quantity::SpecificEnergy, h_fw_out, h_fw_in, none,
-                         "(the feedwater inlet enthalpy h_fw_in: a heater does not cool the feedwater)",
-                         ErrorCode::Impossible);
-    if (h_drain < h_fw_in)
-        throw RangeError("h_drain", Quantity::SpecificEnergy, h_drain, h_fw_in, none,
-                         "(the feedwater inlet enthalpy h_fw_in: the drain cannot leave colder than the coldest "
-                         "water it meets)",
-                         ErrorCode::Impossible);
-    if (!(h_ext > h_drain))
-        throw RangeError("h_ext", Quantity::SpecificEnergy, h_ext, h_drain, none,
-                         "(the drain enthalpy h_drain: the extraction steam must bring more enthalpy than the "
-                         "drain takes away)");
+    check_heated("h_fw_out", h_fw_out, h_fw_in, "the feedwater inlet enthalpy h_fw_in");
+    check_drain_and_extraction(h_fw_in, h_drain, h_ext);
     const double q_fw = m_fw * (h_fw_out - h_fw_in);
     const double q_casc = m_casc * (h_casc - h_drain);
     const double m = (q_fw - q_casc) / (h_ext - h_drain);
