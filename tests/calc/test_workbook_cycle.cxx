@@ -32,42 +32,6 @@ using css::uno::Reference;
 constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
 constexpr double kC0 = 273.15;
 
-// SI -> US factors, exact by definition (NIST SP 811 (2008) Appendix B).
-constexpr double kPsiaPerMPa = 1e6 / 6894.757293168361;
-constexpr double kLbmhPerKgs = 3600.0 / 0.45359237;
-constexpr double kKJPerBtu = 1.05505585262;     // international table Btu
-constexpr double kKJkgPerBtulbm = 2.326;        // exact: the IT Btu/lbm is 2.326 kJ/kg
-constexpr double kKJkgKPerBtulbmF = 4.1868;     // exact
-
-enum class Q { Plain, P, T, DT, H, S, M, HR };
-
-double to_us(Q q, double v) {
-    switch (q) {
-        case Q::P: return v * kPsiaPerMPa;
-        case Q::T: return v * 1.8 + 32;
-        case Q::DT: return v * 1.8;
-        case Q::H: return v / kKJkgPerBtulbm;
-        case Q::S: return v / kKJkgKPerBtulbmF;
-        case Q::M: return v * kLbmhPerKgs;
-        case Q::HR: return v / kKJPerBtu;
-        case Q::Plain: break;
-    }
-    return v;
-}
-double from_us(Q q, double v) {
-    switch (q) {
-        case Q::P: return v / kPsiaPerMPa;
-        case Q::T: return (v - 32) / 1.8;
-        case Q::DT: return v / 1.8;
-        case Q::H: return v * kKJkgPerBtulbm;
-        case Q::S: return v * kKJkgKPerBtulbmF;
-        case Q::M: return v / kLbmhPerKgs;
-        case Q::HR: return v * kKJPerBtu;
-        case Q::Plain: break;
-    }
-    return v;
-}
-
 // The inputs of the workbook (Cycle rows 11..) in their order, with what each holds.
 struct InputDef {
     const char* key;
@@ -259,20 +223,8 @@ const std::vector<PointDef> kPoints = {
     {"p_s1", "h_d1", "m_d1"}};
 constexpr int kPointRow0 = 8;
 
-class CycleBook : public ::testing::Test {
+class CycleBook : public BookTest {
 protected:
-    void load(const char* file) { ASSERT_TRUE(wb_.open(file)); }
-    void TearDown() override { wb_.close(); }
-
-    Reference<css::table::XCell> at(const char* sheet, char col, int row) {
-        return wb_.sheet(sheet)->getCellByPosition(col - 'A', row - 1);
-    }
-    std::string shown(const char* sheet, char col, int row) {
-        return wb_.shown(sheet, std::string(1, col) + std::to_string(row));
-    }
-    bool blank(const char* sheet, char col, int row) {
-        return at(sheet, col, row)->getType() == css::table::CellContentType_EMPTY;
-    }
     // Row of each key in column A of a sheet (rows 1..300).
     std::map<std::string, int> keys(const char* sheet) {
         std::map<std::string, int> m;
@@ -402,8 +354,6 @@ protected:
             }
         }
     }
-
-    WorkbookDoc wb_;
 };
 
 TEST_F(CycleBook, DemoBalanceMatchesTheCoreCaseByCase) {

@@ -28,29 +28,6 @@ using ::rtl::OUString;
 constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
 constexpr double kC0 = 273.15;
 
-// SI -> US factors, exact by definition (NIST SP 811 (2008) Appendix B).
-constexpr double kPsiaPerMPa = 1e6 / 6894.757293168361;
-constexpr double kLbmhPerKgs = 3600.0 / 0.45359237;
-constexpr double kKJPerBtu = 1.05505585262;           // international table Btu
-constexpr double kKJkgPerBtulbm = 2.326;              // exact: the IT Btu/lbm is defined as 2.326 kJ/kg
-constexpr double kKJkgKPerBtulbmF = 4.1868;
-
-enum class Q { Plain, P, T, DT, H, S, M, HR };  // what a cell holds, for the US conversion
-
-double to_us(Q q, double v) {
-    switch (q) {
-        case Q::P: return v * kPsiaPerMPa;
-        case Q::T: return v * 1.8 + 32;
-        case Q::DT: return v * 1.8;
-        case Q::H: return v / kKJkgPerBtulbm;
-        case Q::S: return v / kKJkgKPerBtulbmF;
-        case Q::M: return v * kLbmhPerKgs;
-        case Q::HR: return v / kKJPerBtu;
-        case Q::Plain: break;
-    }
-    return v;
-}
-
 // A result cell and the value the core gives for it in SI.
 struct Expected {
     const char* sheet;
@@ -60,42 +37,10 @@ struct Expected {
     Q q;
 };
 
-// SI value of a US reading (the exact inverse of to_us).
-double from_us(Q q, double v) {
-    switch (q) {
-        case Q::P: return v / kPsiaPerMPa;
-        case Q::T: return (v - 32) / 1.8;
-        case Q::DT: return v / 1.8;
-        case Q::H: return v * kKJkgPerBtulbm;
-        case Q::S: return v * kKJkgKPerBtulbmF;
-        case Q::M: return v / kLbmhPerKgs;
-        case Q::HR: return v * kKJPerBtu;
-        case Q::Plain: break;
-    }
-    return v;
-}
-
-// One document loaded from a private copy of a built workbook.
-class PlantBook : public ::testing::Test {
+class PlantBook : public BookTest {
 protected:
-    void load(const char* file) { ASSERT_TRUE(wb_.open(file)); }
-    void TearDown() override { wb_.close(); }
     void calculate() { wb_.recalc(); }
 
-    css::uno::Reference<css::table::XCell> at(const char* sheet, char col, int row) {
-        return wb_.sheet(sheet)->getCellByPosition(col - 'A', row - 1);
-    }
-    std::string shown(const char* sheet, char col, int row) {
-        return wb_.shown(sheet, std::string(1, col) + std::to_string(row));
-    }
-    // A number cell; blank gives NaN. Error cells fail the test.
-    double value(const char* sheet, char col, int row) {
-        auto c = at(sheet, col, row);
-        EXPECT_EQ(c->getError(), 0) << sheet << "." << col << row << " shows " << shown(sheet, col, row);
-        if (c->getType() == css::table::CellContentType_EMPTY || shown(sheet, col, row).empty()) return kNaN;
-        return c->getValue();
-    }
-    void put(const char* sheet, char col, int row, double v) { at(sheet, col, row)->setValue(v); }
     void put_text(const char* sheet, char col, int row, const char* s) {
         at(sheet, col, row)->setFormula(OUString::createFromAscii(s));
     }
@@ -124,8 +69,6 @@ protected:
                 if (!std::isnan(v)) put(sheet, *c, r, to_us(q, v));
             }
     }
-
-    WorkbookDoc wb_;
 };
 
 // ---------------------------------------------------------------- expected values

@@ -1,14 +1,16 @@
 // SPDX-License-Identifier: MPL-2.0
-// Shared by the workbook tests (test_workbook.cxx, test_workbook_plant.cxx):
-// a built workbook opened from a private copy in the shared headless office,
-// cell access by sheet name, and the axis scales of its embedded charts read
-// back from the chart model.
+// Shared by the workbook tests (test_workbook*.cxx): a built workbook opened
+// from a private copy in the shared headless office, cell access by sheet
+// name, the axis scales of its embedded charts read back from the chart
+// model, a test fixture with cell access by column letter and row, and the
+// SI <-> US conversion of the workbooks' units cell.
 #pragma once
 
 #include <sys/stat.h>
 #include <unistd.h>
 
 #include <filesystem>
+#include <limits>
 #include <string>
 #include <vector>
 
@@ -26,6 +28,7 @@
 #include <com/sun/star/sheet/XSpreadsheet.hpp>
 #include <com/sun/star/sheet/XSpreadsheetDocument.hpp>
 #include <com/sun/star/sheet/XSpreadsheets.hpp>
+#include <com/sun/star/table/XCell.hpp>
 #include <com/sun/star/table/XCellRange.hpp>
 #include <com/sun/star/table/XTableChart.hpp>
 #include <com/sun/star/table/XTableChartsSupplier.hpp>
@@ -35,6 +38,45 @@
 #include "calc_test.hxx"
 
 namespace isentra::calctest {
+
+// SI -> US factors, exact by definition (NIST SP 811 (2008) Appendix B).
+constexpr double kPsiaPerMPa = 1e6 / 6894.757293168361;
+constexpr double kLbmhPerKgs = 3600.0 / 0.45359237;
+constexpr double kKJPerBtu = 1.05505585262;     // international table Btu
+constexpr double kKJkgPerBtulbm = 2.326;        // exact: the IT Btu/lbm is defined as 2.326 kJ/kg
+constexpr double kKJkgKPerBtulbmF = 4.1868;     // exact
+
+enum class Q { Plain, P, T, DT, H, S, M, HR };  // what a cell holds, for the US conversion
+
+// US value of an SI value (temperatures in degC -> degF).
+inline double to_us(Q q, double v) {
+    switch (q) {
+        case Q::P: return v * kPsiaPerMPa;
+        case Q::T: return v * 1.8 + 32;
+        case Q::DT: return v * 1.8;
+        case Q::H: return v / kKJkgPerBtulbm;
+        case Q::S: return v / kKJkgKPerBtulbmF;
+        case Q::M: return v * kLbmhPerKgs;
+        case Q::HR: return v / kKJPerBtu;
+        case Q::Plain: break;
+    }
+    return v;
+}
+
+// SI value of a US reading (the exact inverse of to_us).
+inline double from_us(Q q, double v) {
+    switch (q) {
+        case Q::P: return v / kPsiaPerMPa;
+        case Q::T: return (v - 32) / 1.8;
+        case Q::DT: return v / 1.8;
+        case Q::H: return v * kKJkgPerBtulbm;
+        case Q::S: return v * kKJkgKPerBtulbmF;
+        case Q::M: return v / kLbmhPerKgs;
+        case Q::HR: return v * kKJPerBtu;
+        case Q::Plain: break;
+    }
+    return v;
+}
 
 // One axis of a chart as the chart model reports it: for an automatic
 // minimum or maximum, Min and Max are the values Calc's scaling chose.
@@ -155,6 +197,35 @@ public:
 
 private:
     std::string dir_;
+};
+
+// A test on one document loaded from a private copy of a built workbook,
+// its cells by column letter and row number.
+class BookTest : public ::testing::Test {
+protected:
+    void load(const char* file) { ASSERT_TRUE(wb_.open(file)); }
+    void TearDown() override { wb_.close(); }
+
+    css::uno::Reference<css::table::XCell> at(const char* sheet, char col, int row) {
+        return wb_.sheet(sheet)->getCellByPosition(col - 'A', row - 1);
+    }
+    std::string shown(const char* sheet, char col, int row) {
+        return wb_.shown(sheet, std::string(1, col) + std::to_string(row));
+    }
+    bool blank(const char* sheet, char col, int row) {
+        return at(sheet, col, row)->getType() == css::table::CellContentType_EMPTY;
+    }
+    // A number cell; blank gives NaN. Error cells fail the test.
+    double value(const char* sheet, char col, int row) {
+        auto c = at(sheet, col, row);
+        EXPECT_EQ(c->getError(), 0) << sheet << "." << col << row << " shows " << shown(sheet, col, row);
+        if (c->getType() == css::table::CellContentType_EMPTY || shown(sheet, col, row).empty())
+            return std::numeric_limits<double>::quiet_NaN();
+        return c->getValue();
+    }
+    void put(const char* sheet, char col, int row, double v) { at(sheet, col, row)->setValue(v); }
+
+    WorkbookDoc wb_;
 };
 
 }  // namespace isentra::calctest
