@@ -10,6 +10,8 @@
 #include <cctype>
 #include <cmath>
 #include <cstdio>
+#include <cstdlib>
+#include <cstring>
 #include <limits>
 #include <utility>
 
@@ -685,7 +687,11 @@ std::vector<Function> build() {
         f.summary = "Spells out a units text: which unit each quantity gets under it, and for gauge pressures the "
                     "barometric pressure added to a reading, e.g. STEAM.UNITS.SPELL(\"psig\") says SI with p in "
                     "psig. Use it to check a workbook's units cell.";
-        f.args = {units_arg()};
+        // Its argument is the text to spell out, not the units of a result.
+        f.args = {Arg{"units", Quantity::Text,
+                      "The units text to spell out, e.g. a workbook's units cell or \"US p=psig\"; blank "
+                      "means SI",
+                      true}};
         f.kind = ResultKind::Text;
         out.push_back(std::move(f));  // evaluated specially by call()
     }
@@ -808,6 +814,9 @@ std::string short_num(double v) {
     char buf[32];
     if (v == 0) v = 0;
     std::snprintf(buf, sizeof buf, "%.5g", v);
+    // A large bound reads as a plain number in the Wizard ("100000 kg/s", not "1e+05 kg/s").
+    if (std::strchr(buf, 'e') && std::fabs(v) >= 1 && std::fabs(v) < 1e15)
+        std::snprintf(buf, sizeof buf, "%.0f", std::strtod(buf, nullptr));
     return buf;
 }
 

@@ -495,7 +495,7 @@ std::string functions_md(const std::vector<cat::Function>& fs) {
                 for (std::size_t i = 0; i < f.args.size(); ++i) {
                     const cat::Arg& a = f.args[i];
                     std::string name = md(a.name) + (a.varargs ? "..." : "") + (a.optional ? " (optional)" : "");
-                    if (i == f.units_index()) {
+                    if (i == f.units_index() && f.name != "STEAM.UNITS.SPELL") {  // its text is the subject
                         o << "| " << name << " | the units of all inputs and the result, see [Units](#units) | | |\n";
                         continue;
                     }
