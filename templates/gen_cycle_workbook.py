@@ -460,7 +460,7 @@ def cycle_sheet(us, demo):
                      c_span("Units of the inputs and results, SI or US: the units the inputs are typed in and the "
                             "results come out in (changing it converts nothing). SI: MPa (absolute), °C, kJ/kg, kg/s, "
                             "kJ/kWh.  US: psia, °F, Btu/lbm, lbm/h, Btu/kWh. Power in MW in both.", "note", 5)]))
-    rows.append(row([c_text("Case shown", "label"), c_num(1, "input"),
+    rows.append(row([c_text("Case shown", "label_wrap"), c_num(1, "input"),
                      c_span("1 to 4: the case whose points (sheet Points) and charts (sheet Charts) are shown", "note",
                             5)]))
     rows.append(row([c_empty()]))
@@ -478,7 +478,7 @@ def cycle_sheet(us, demo):
             cells.append(c_blank("input"))
     rows.append(row(cells))
     for key, desc, kind, v in INPUTS:
-        cells = [c_text(key, "label"), c_text(desc, "label"), u_cell(kind)]
+        cells = [c_text(key, "label"), c_text(desc, "label_wrap"), u_cell(kind)]
         for i, (_, over) in enumerate(CASES):
             if i == 0:
                 val = v
@@ -554,7 +554,7 @@ def balance_sheet():
     assert len(rows) + 1 == BAL_IN0
     for i, (key, desc, kind, _) in enumerate(INPUTS):
         r = IN_ROW0 + i
-        cells = [c_text(key, "label"), c_text(desc, "label"), u_cell(kind)]
+        cells = [c_text(key, "label"), c_text(desc, "label_wrap"), u_cell(kind)]
         for j, c in enumerate(CASE_COLS):
             src = f"[$Cycle.{c}{r}]"
             if j == 0:
@@ -576,7 +576,7 @@ def balance_sheet():
     rows.append(row([c_text("Balance", "subtitle")]))
     assert len(rows) + 1 == BAL_ROW0
     for key, desc, kind, tpl in BALANCE:
-        cells = [c_text(key, "label"), c_text(desc, "label"), u_cell(kind)]
+        cells = [c_text(key, "label"), c_text(desc, "label_wrap"), u_cell(kind)]
         for c in CASE_COLS:
             if tpl.startswith("DIFF:") or tpl.startswith("REL:"):
                 op, ref = tpl.split(":")

@@ -171,7 +171,7 @@ def test_sheet(readings, system, chart_cell_xml):
     rows.append(row([c_text("CAUTION: results used for operation or design decisions are to be checked under local codes"
                             " by a licensed engineer. Isentra comes without any warranty.", "caution")]))
     rows.append(row([c_empty()]))
-    rows.append(row([c_text("Units of the readings and results", "label"), c_text(system, "input"),
+    rows.append(row([c_text("Units of the readings and results", "label_wrap"), c_text(system, "input"),
                      c_span(units_note(system), "note", 15)]))
     rows.append(row([c_text("Pressure uncertainty, fraction", "label"), c_num(U_P, "input"),
                      c_text("instrument uncertainty as a fraction of the reading (0.0025 = 0.25 %)")]))

@@ -127,6 +127,7 @@ CELL_STYLES = """
   <style:style style:name="subtitle" style:family="table-cell"><style:text-properties fo:font-weight="bold"/></style:style>
   <style:style style:name="caution" style:family="table-cell"><style:text-properties fo:font-weight="bold" fo:color="#b00000"/></style:style>
   <style:style style:name="label" style:family="table-cell"/>
+  <style:style style:name="label_wrap" style:family="table-cell"><style:table-cell-properties fo:wrap-option="wrap"/></style:style>
   <style:style style:name="head" style:family="table-cell"><style:table-cell-properties fo:background-color="#dddddd" fo:wrap-option="wrap"/><style:text-properties fo:font-weight="bold" fo:font-size="9pt"/></style:style>
   <style:style style:name="unit" style:family="table-cell"><style:table-cell-properties fo:background-color="#dddddd"/><style:text-properties fo:font-size="9pt"/></style:style>
   <style:style style:name="input" style:family="table-cell" style:data-style-name="Nf"><style:table-cell-properties fo:background-color="#fff3b0"/></style:style>
