@@ -29,9 +29,6 @@ namespace eq = isentra::equipment;
 namespace cy = isentra::cycle;
 using css::uno::Reference;
 
-constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
-constexpr double kC0 = 273.15;
-
 // The inputs of the workbook (Cycle rows 11..) in their order, with what each holds.
 struct InputDef {
     const char* key;

@@ -25,9 +25,6 @@ namespace eq = isentra::equipment;
 using namespace css::uno;
 using ::rtl::OUString;
 
-constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
-constexpr double kC0 = 273.15;
-
 // A result cell and the value the core gives for it in SI.
 struct Expected {
     const char* sheet;

@@ -39,6 +39,9 @@
 
 namespace isentra::calctest {
 
+constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
+constexpr double kC0 = 273.15;  // K at 0 degC (SI Brochure: the definition of the degree Celsius)
+
 // SI -> US factors, exact by definition (NIST SP 811 (2008) Appendix B).
 constexpr double kPsiaPerMPa = 1e6 / 6894.757293168361;
 constexpr double kLbmhPerKgs = 3600.0 / 0.45359237;
@@ -219,8 +222,7 @@ protected:
     double value(const char* sheet, char col, int row) {
         auto c = at(sheet, col, row);
         EXPECT_EQ(c->getError(), 0) << sheet << "." << col << row << " shows " << shown(sheet, col, row);
-        if (c->getType() == css::table::CellContentType_EMPTY || shown(sheet, col, row).empty())
-            return std::numeric_limits<double>::quiet_NaN();
+        if (c->getType() == css::table::CellContentType_EMPTY || shown(sheet, col, row).empty()) return kNaN;
         return c->getValue();
     }
     void put(const char* sheet, char col, int row, double v) { at(sheet, col, row)->setValue(v); }
