@@ -157,6 +157,13 @@ void check_eta_dry(double eta) {
                          "(the dry-steam section efficiency is a fraction above 0, e.g. 0.90 for 90 %)");
 }
 
+// A section with a wet exhaust expands: p_out below p_in.
+void check_expands(double p_in, double p_out) {
+    if (!(p_out < p_in))
+        throw RangeError("p_out", Quantity::Pressure, p_out, none, p_in,
+                         "(the inlet pressure p_in: the section expands the steam to a lower pressure)");
+}
+
 }  // namespace
 
 LinePoint expansion_line_point_pT(double p_in, double T_in, double p_out, double eta, double p_ext) {
@@ -172,18 +179,14 @@ LinePoint expansion_line_point_ph(double p_in, double h_in, double p_out, double
 WetExhaust wet_exhaust_pT(double p_in, double T_in, double p_out, double eta_dry, double a, double h_loss) {
     check_eta_dry(eta_dry);
     const equipment::Expansion e = equipment::turbine_expansion_pT(p_in, T_in, p_out, eta_dry);
-    if (!(p_out < p_in))
-        throw RangeError("p_out", Quantity::Pressure, p_out, none, p_in,
-                         "(the inlet pressure p_in: the section expands the steam to a lower pressure)");
+    check_expands(p_in, p_out);
     return wet_exhaust(e, quality_or_nan(state_pT(p_in, T_in)), p_out, eta_dry, a, h_loss);
 }
 
 WetExhaust wet_exhaust_ph(double p_in, double h_in, double p_out, double eta_dry, double a, double h_loss) {
     check_eta_dry(eta_dry);
     const equipment::Expansion e = equipment::turbine_expansion_ph(p_in, h_in, p_out, eta_dry);
-    if (!(p_out < p_in))
-        throw RangeError("p_out", Quantity::Pressure, p_out, none, p_in,
-                         "(the inlet pressure p_in: the section expands the steam to a lower pressure)");
+    check_expands(p_in, p_out);
     return wet_exhaust(e, quality_or_nan(state_ph(p_in, h_in)), p_out, eta_dry, a, h_loss);
 }
 
