@@ -20,13 +20,7 @@
 
 namespace {
 
-using isentra::clitest::Outcome;
-using isentra::clitest::contains;
-using isentra::clitest::expect_same;
-using isentra::clitest::parse;
-using isentra::clitest::read_file;
-using isentra::clitest::run;
-using isentra::clitest::split;
+using namespace isentra::clitest;  // cli_run.hpp, text_check.hpp
 
 // A temporary file name (the file is removed at the end of the test).
 struct TempFile {

@@ -17,12 +17,7 @@
 
 namespace {
 
-using isentra::clitest::Outcome;
-using isentra::clitest::contains;
-using isentra::clitest::expect_same;
-using isentra::clitest::parse;
-using isentra::clitest::run;
-using isentra::clitest::split;
+using namespace isentra::clitest;  // cli_run.hpp, text_check.hpp
 
 // The cell function NAME(args...; units) as Calc would compute it.
 double cell(const std::string& name, const std::vector<double>& args, const std::string& units = "") {
