@@ -681,7 +681,7 @@ def data_sheet():
         cs, ch = col_name(10 + 2 * j), col_name(11 + 2 * j)
         pref = sel_of(pk)
         put(1, cs, c_text(f"{name} s"))
-        put(1, ch, c_formula(f'"{name} "&IF({PT_OK};TEXT({pref};"0.0000")&" "&IF({US_TEST};"psia";"MPa");"")', string=True))
+        put(1, ch, c_formula(f'"{name} "&IF({PT_OK};TEXT(ROUND({pref};3-INT(LOG10({pref})));"General")&" "&IF({US_TEST};"psia";"MPa");"")', string=True))
         for i in range(ISO_N):
             r = 2 + i
             frac = -0.05 + 0.10 * i / (ISO_N - 1)
