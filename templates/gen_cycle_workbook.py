@@ -881,7 +881,7 @@ def main():
     write(os.path.join(out, "isentra-cycle-heat-balance.ots"), MIME_OTS, False, False,
           "Cycle heat balance: reheat regenerative cycle (Isentra)")
     write(os.path.join(out, "isentra-cycle-heat-balance-us.ots"), MIME_OTS, True, False,
-          "Cycle heat balance, US units: reheat regenerative cycle (Isentra)")
+          "Cycle heat balance: reheat regenerative cycle, US units (Isentra)")
 
 
 if __name__ == "__main__":

@@ -679,7 +679,7 @@ def main():
     write(os.path.join(out, "isentra-plant-performance.ots"), MIME_OTS, False, "SI",
           "Plant performance test: heaters, pumps, heat rate (Isentra)")
     write(os.path.join(out, "isentra-plant-performance-us.ots"), MIME_OTS, False, "US",
-          "Plant performance test, US units: heaters, pumps, heat rate (Isentra)")
+          "Plant performance test: heaters, pumps, heat rate, US units (Isentra)")
 
 
 if __name__ == "__main__":
