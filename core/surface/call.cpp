@@ -168,8 +168,9 @@ Table call_units_spell(const std::vector<Table>& args) {
     std::string out = (text.empty() ? std::string("An empty units text") : "\"" + text + "\"") + " means " +
                       spec.name() + ":";
     bool first = true;
-    for (int qi = static_cast<int>(Quantity::Pressure); qi <= static_cast<int>(Quantity::HeatRate); ++qi) {
+    for (int qi = static_cast<int>(Quantity::Pressure); qi < static_cast<int>(Quantity::Text); ++qi) {
         const Quantity q = static_cast<Quantity>(qi);
+        if (q == Quantity::Percent) continue;  // always %
         out += first ? " " : "; ";
         first = false;
         out += std::string(units::quantity_name(q)) + " " + spec.symbol(q);

@@ -356,6 +356,10 @@ TEST(InputUnitsSpell, SpellsEveryQuantityAndTheBarometricPressure) {
     EXPECT_TRUE(has(v.text, "14.2 psia")) << v.text;
     EXPECT_TRUE(has(v.text, "temperature °F")) << v.text;
     EXPECT_TRUE(has(v.text, "mass flow lbm/h")) << v.text;
+    // The flow meters' quantities too (US: inH2O at 60 degF, inches; docs/flow.md).
+    EXPECT_TRUE(has(v.text, "differential pressure inH")) << v.text;
+    EXPECT_TRUE(has(v.text, "length in")) << v.text;
+    EXPECT_FALSE(has(v.text, "percent")) << v.text;
     v = run("UNITS.SPELL", {Value::of_text("SI p=barg patm=0.0985MPa")});
     EXPECT_TRUE(has(v.text, "0.985 bar = 0.0985 MPa")) << v.text;
     v = run("UNITS.SPELL", {});
