@@ -869,6 +869,23 @@ def write(path, mimetype, us, demo, title):
     write_package(path, mimetype, parts, extra)
 
 
+# The worked example of isentra-recalc (docs/recalc.md): the design case run
+# over condenser pressure. A case table names the input cells in its header
+# row; the cells come from this generator's own layout, so they stay in step.
+CONDENSER_CASES_SI = [0.005, 0.0065, 0.008, 0.009, 0.010]  # MPa; 0.0065 is the design (invented demo values)
+
+
+def condenser_case_table():
+    keys = [k for k, *_ in INPUTS]
+    cell = f"{CYCLE}.D{IN_ROW0 + keys.index('p_c')}"
+    return f"{cell}\n" + "".join(f"{v:g}\n" for v in CONDENSER_CASES_SI)
+
+
+def condenser_collect():
+    """The cells to collect: the design column's and the 9 kPa case's gross heat rate."""
+    return f"{CYCLE}.D{SUM_ROW['HR_g']},{CYCLE}.E{SUM_ROW['HR_g']}"
+
+
 def main():
     if len(sys.argv) != 2:
         sys.exit("usage: gen_cycle_workbook.py OUTDIR")
@@ -882,6 +899,10 @@ def main():
           "Cycle heat balance: reheat regenerative cycle (Isentra)")
     write(os.path.join(out, "isentra-cycle-heat-balance-us.ots"), MIME_OTS, True, False,
           "Cycle heat balance: reheat regenerative cycle, US units (Isentra)")
+    with open(os.path.join(out, "harrow-fen-unit3-condenser-cases.csv"), "w", encoding="utf-8", newline="") as f:
+        f.write(condenser_case_table())
+    with open(os.path.join(out, "harrow-fen-unit3-condenser-collect.txt"), "w", encoding="utf-8") as f:
+        f.write(condenser_collect() + "\n")
 
 
 if __name__ == "__main__":
