@@ -146,9 +146,7 @@ void add_metastable(std::vector<Function>& out) {
                     "Array formula over 12 cells; x is the equilibrium quality.";
         f.note = mv_note;
         f.args = {state_arg(in_p.arg, in_p.q, in_p.description), state_arg(pair.b->arg, pair.b->q, pair.b->description),
-                  units_arg(),
-                  Arg{"header", Quantity::None,
-                      "Optional: 1 (or TRUE) puts a row of names and units above the values; default 0", true}};
+                  units_arg(), header_arg()};
         f.kind = ResultKind::Row;
         f.row_names.push_back("p");
         f.row_quantities.push_back(Quantity::Pressure);
