@@ -5,6 +5,8 @@
 // isentra::call with unit conversion.
 #include <gtest/gtest.h>
 
+#include "oracle_csv.hpp"
+
 #include <cmath>
 #include <fstream>
 #include <set>
@@ -30,44 +32,10 @@ double rel(double a, double b) { return std::fabs(a - b) / std::max(std::fabs(b)
 
 // ---- The oracle CSV (tests/oracle/gen_equipment.py; python3-iapws 1.5.2 (Debian)) ----
 
-struct OracleRow {
-    std::string kind;
-    std::vector<double> a, r;
-    int line = 0;
-};
-
-std::vector<OracleRow> load_oracle() {
-    std::ifstream in(std::string(ISENTRA_TEST_DATA_DIR) + "/equipment_oracle.csv");
-    std::vector<OracleRow> rows;
-    std::string line;
-    int n = 0;
-    bool header = true;
-    while (std::getline(in, line)) {
-        ++n;
-        if (line.empty() || line[0] == '#') continue;
-        if (header) {
-            header = false;
-            continue;
-        }
-        std::vector<std::string> f;
-        std::stringstream ss(line);
-        std::string cell;
-        while (std::getline(ss, cell, ',')) f.push_back(cell);
-        while (f.size() < 19) f.emplace_back();
-        OracleRow r;
-        r.kind = f[0];
-        r.line = n;
-        for (int i = 1; i <= 8; ++i)
-            if (!f[i].empty()) r.a.push_back(std::stod(f[i]));
-        for (int i = 9; i <= 18; ++i)
-            if (!f[i].empty()) r.r.push_back(std::stod(f[i]));
-        rows.push_back(std::move(r));
-    }
-    return rows;
-}
+using isentra::fixture::OracleRow;
 
 const std::vector<OracleRow>& oracle() {
-    static const std::vector<OracleRow> rows = load_oracle();
+    static const std::vector<OracleRow> rows = isentra::fixture::load_oracle_csv("equipment_oracle.csv", 1, 9, 19);
     return rows;
 }
 

@@ -6,6 +6,8 @@
 // US units, the uncertainty budget, and the catalogue functions through call().
 #include <gtest/gtest.h>
 
+#include "oracle_csv.hpp"
+
 #include <cmath>
 #include <cstdio>
 #include <fstream>
@@ -33,45 +35,10 @@ double rel(double a, double b) { return std::fabs(a - b) / std::max(std::fabs(b)
 
 // ---- The oracle CSV (python3-fluids 1.0.22 (Debian) with Isentra's properties) --------------
 
-struct OracleRow {
-    std::string kind, device;
-    std::vector<double> a, r;
-    int line = 0;
-};
-
-std::vector<OracleRow> load_oracle() {
-    std::ifstream in(std::string(ISENTRA_TEST_DATA_DIR) + "/flow_oracle.csv");
-    std::vector<OracleRow> rows;
-    std::string line;
-    int n = 0;
-    bool header = true;
-    while (std::getline(in, line)) {
-        ++n;
-        if (line.empty() || line[0] == '#') continue;
-        if (header) {
-            header = false;
-            continue;
-        }
-        std::vector<std::string> f;
-        std::stringstream ss(line);
-        std::string cell;
-        while (std::getline(ss, cell, ',')) f.push_back(cell);
-        while (f.size() < 14) f.emplace_back();
-        OracleRow r;
-        r.kind = f[0];
-        r.device = f[1];
-        r.line = n;
-        for (int i = 2; i <= 10; ++i)
-            if (!f[i].empty()) r.a.push_back(std::stod(f[i]));
-        for (int i = 11; i <= 13; ++i)
-            if (!f[i].empty()) r.r.push_back(std::stod(f[i]));
-        rows.push_back(std::move(r));
-    }
-    return rows;
-}
+using isentra::fixture::OracleRow;
 
 const std::vector<OracleRow>& oracle() {
-    static const std::vector<OracleRow> rows = load_oracle();
+    static const std::vector<OracleRow> rows = isentra::fixture::load_oracle_csv("flow_oracle.csv", 2, 11, 14);
     return rows;
 }
 
