@@ -251,7 +251,6 @@ std::string lower(std::string s) {
 // mix-up, 1E308) is caught while no real reading is refused.
 
 namespace detail::ranges {
-namespace {
 Range make(double lo, bool lo_open, const char* lo_why, double hi, bool hi_open, const char* hi_why) {
     Range r;
     r.min = lo;
@@ -262,7 +261,6 @@ Range make(double lo, bool lo_open, const char* lo_why, double hi, bool hi_open,
     r.max_why = hi_why;
     return r;
 }
-}  // namespace
 
 Range absolute_pressure() {
     return make(0.0, true, "(an absolute pressure is above 0)", if97::p_max, false, "(the upper limit of IAPWS-IF97)");

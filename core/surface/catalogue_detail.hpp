@@ -32,6 +32,8 @@ Arg units_arg();
 // The ranges of the usual argument quantities (core units), each with its
 // reasons; catalogue.cpp gives the source of each limit.
 namespace ranges {
+// A range from its bounds, each open or closed, each with its reason "(...)".
+Range make(double lo, bool lo_open, const char* lo_why, double hi, bool hi_open, const char* hi_why);
 Range absolute_pressure();           // (0, 100] MPa: IAPWS-IF97 regions 1-3 reach 100 MPa
 Range temperature();                 // [273.15, 2273.15] K: IAPWS-IF97
 Range enthalpy();                    // [-0.05, 7377] kJ/kg: the enthalpies IAPWS-IF97 covers

@@ -89,14 +89,7 @@ Function make_row(const std::string& name, const std::string& method, std::strin
 // numerics; the standards' own limits of use (D, d, beta, Re_D, p2/p1) are
 // checked in flow.cpp, where they depend on the device.
 Range bounds(double lo, bool lo_open, const char* lo_why, double hi, bool hi_open, const char* hi_why) {
-    Range r;
-    r.min = lo;
-    r.min_open = lo_open;
-    r.min_why = lo_why;
-    r.max = hi;
-    r.max_open = hi_open;
-    r.max_why = hi_why;
-    return r;
+    return ranges::make(lo, lo_open, lo_why, hi, hi_open, hi_why);
 }
 Range dp_range() {
     return bounds(0.0, true, "(the differential pressure across a meter is above 0)", 1e8, false,
