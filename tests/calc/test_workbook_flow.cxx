@@ -21,8 +21,6 @@ namespace {
 namespace fl = isentra::flow;
 using ::rtl::OUString;
 
-constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
-constexpr double kC0 = 273.15;
 // US -> SI, exact by definition (NIST SP 811 (2008) Appendix B; inH2O at 60 degF: B.8, 248.84 Pa).
 constexpr double kPaPerPsi = 6894.757293168361;
 constexpr double kMmPerIn = 25.4;
@@ -33,23 +31,8 @@ constexpr double kMPerFt = 0.3048;
 const char* const kCols = "CDEF";
 const char* const kRunCols = "CDE";
 
-class FlowBook : public ::testing::Test {
+class FlowBook : public BookTest {
 protected:
-    void load(const char* file) { ASSERT_TRUE(wb_.open(file)); }
-    void TearDown() override { wb_.close(); }
-    css::uno::Reference<css::table::XCell> at(const char* sheet, char col, int row) {
-        return wb_.sheet(sheet)->getCellByPosition(col - 'A', row - 1);
-    }
-    std::string shown(const char* sheet, char col, int row) {
-        return wb_.shown(sheet, std::string(1, col) + std::to_string(row));
-    }
-    double value(const char* sheet, char col, int row) {
-        auto c = at(sheet, col, row);
-        EXPECT_EQ(c->getError(), 0) << sheet << "." << col << row << " shows " << shown(sheet, col, row);
-        if (c->getType() == css::table::CellContentType_EMPTY || shown(sheet, col, row).empty()) return kNaN;
-        return c->getValue();
-    }
-
     // The meter of column c from its readings, in SI core units (us: read in US units).
     struct Reading {
         fl::Meter meter;
@@ -120,7 +103,6 @@ protected:
         return flows;
     }
 
-    WorkbookDoc wb_;
 };
 
 TEST_F(FlowBook, DemoFlowsMatchTheCoreAndFeedTheHeatRate) {
