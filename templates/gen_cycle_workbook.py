@@ -7,7 +7,7 @@
 writes into OUTDIR:
   harrow-fen-unit3-cycle-heat-balance.ods     the demo: the design heat balance of the (fictional)
                                               Harrow Fen Power Station, Unit 3, and three what-if cases
-  harrow-fen-unit3-cycle-heat-balance-us.ods  the same design in US customary figures (units cell "US")
+  harrow-fen-unit3-cycle-heat-balance-us.ods  the same design in round US figures (units cell "US")
   isentra-cycle-heat-balance.ots              the template: the design inputs kept, the cases blank
   isentra-cycle-heat-balance-us.ots           the same in US units (the chart axes are fixed per file)
 
@@ -53,7 +53,7 @@ US_TEST = f'UPPER({UNITS})="US"'
 # kind: (SI unit, US unit, cell style)
 KINDS = {
     "p": ("MPa", "psia", "r4"), "dp": ("MPa", "psi", "r4"), "T": ("°C", "°F", "r2"), "dT": ("K", "°F", "r2"),
-    "m": ("kg/s", "lbm/h", "r3"), "h": ("kJ/kg", "Btu/lbm", "r2"), "s": ("kJ/(kg·K)", "Btu/(lbm·°F)", "r5"),
+    "m": ("kg/s", "lbm/h", "rm"), "h": ("kJ/kg", "Btu/lbm", "r2"), "s": ("kJ/(kg·K)", "Btu/(lbm·°F)", "r5"),
     "f": ("fraction", "fraction", "r4"), "sw": ("1 or 0", "1 or 0", "r0"), "MW": ("MW", "MW", "r3"),
     "kW": ("kW", "kW", "rg"), "hr": ("kJ/kWh", "Btu/kWh", "r1"), "pct": ("%", "%", "rpct"),
     "dpct": ("%", "%", "rdpct"), "g": ("", "", "rg"), "x": ("–", "–", "r5"),
@@ -75,6 +75,30 @@ def to_us(kind, v):
     if kind == "h":
         return v / BTULBM_KJKG
     return v
+
+
+def us_design(kind, v):
+    """A design input in US figures as an engineer writes them (the same design, rounded,
+    as the US copies of the turbine and plant workbooks round theirs): pressures in psia to
+    four or five significant figures (1 psi from 1000 psia, 0.1 from 100, 0.01 from 10,
+    0.001 below), pressure heads to 0.1 psi, temperatures to 0.1 °F, TTDs and DCAs to whole
+    °F, flows to whole klb/h, enthalpy differences to 0.1 Btu/lbm; fractions and switches
+    as they are. The results then differ from the SI demo's within that rounding."""
+    x = to_us(kind, v)
+    if kind == "p":
+        step = 1.0 if x >= 1000 else 0.1 if x >= 100 else 0.01 if x >= 10 else 0.001
+        return round(round(x / step) * step, 3)
+    if kind == "dp":
+        return round(x, 1)
+    if kind == "T":
+        return round(x, 1)
+    if kind == "dT":
+        return float(round(x))
+    if kind == "m":
+        return round(x / 1000) * 1000.0
+    if kind == "h":
+        return round(x, 1)
+    return x
 
 
 def unit_formula(kind):
@@ -488,8 +512,8 @@ def cycle_sheet(us, demo):
                 cells.append(c_blank("input"))
                 continue
             if us:
-                val = to_us(kind, val)
-            cells.append(c_num(val, "input"))
+                val = us_design(kind, val)
+            cells.append(c_num(val, "input_m" if kind == "m" else "input"))
         rows.append(row(cells))
     rows.append(row([c_empty()]))
     rows.append(row([c_text("RESULTS (grey), one column per case", "subtitle")]))
@@ -625,7 +649,7 @@ def points_sheet():
                  c_formula(f'IF({PT_OK};{sel_of(hk)};"")', "r2"),
                  c_formula(f'IF({PT_OK};{call("sPH", p, h)};"")', "r5"),
                  c_formula(f'IF({PT_OK};{call("xPH", p, h)};"")', "r5"),
-                 c_formula(f'IF({PT_OK};{sel_of(mk)};"")', "r3")]
+                 c_formula(f'IF({PT_OK};{sel_of(mk)};"")', "rm")]
         rows.append(row(cells))
     cols = ('<table:table-column table:style-name="coN"/><table:table-column table:style-name="coD"/>'
             '<table:table-column table:style-name="coV" table:number-columns-repeated="6"/>')
@@ -817,6 +841,7 @@ def charts_sheet(us):
 
 
 # ---------------------------------------------------------------- document
+# Flows: 3 decimals in kg/s; whole numbers with grouping from 10,000 (lbm/h) and for a zero flow.
 LOCAL_STYLES = """
   <number:number-style style:name="N0"><number:number number:decimal-places="0" number:min-integer-digits="1"/></number:number-style>
   <number:number-style style:name="N1"><number:number number:decimal-places="1" number:min-decimal-places="1" number:min-integer-digits="1" number:grouping="true"/></number:number-style>
@@ -824,6 +849,11 @@ LOCAL_STYLES = """
   <number:number-style style:name="N3"><number:number number:decimal-places="3" number:min-decimal-places="3" number:min-integer-digits="1" number:grouping="true"/></number:number-style>
   <number:number-style style:name="N4"><number:number number:decimal-places="4" number:min-decimal-places="4" number:min-integer-digits="1"/></number:number-style>
   <number:number-style style:name="N5"><number:number number:decimal-places="5" number:min-decimal-places="5" number:min-integer-digits="1"/></number:number-style>
+  <number:number-style style:name="Nm_big"><number:number number:decimal-places="0" number:min-integer-digits="1" number:grouping="true"/></number:number-style>
+  <number:number-style style:name="Nm"><number:number number:decimal-places="3" number:min-decimal-places="3" number:min-integer-digits="1" number:grouping="true"/><style:map style:condition="value()&gt;=10000" style:apply-style-name="Nm_big"/><style:map style:condition="value()=0" style:apply-style-name="Nm_big"/></number:number-style>
+  <number:number-style style:name="Nmi"><number:number number:decimal-places="4" number:min-decimal-places="0" number:min-integer-digits="1" number:grouping="true"/></number:number-style>
+  <style:style style:name="rm" style:family="table-cell" style:data-style-name="Nm"><style:table-cell-properties fo:background-color="#eeeeee"/></style:style>
+  <style:style style:name="input_m" style:family="table-cell" style:data-style-name="Nmi"><style:table-cell-properties fo:background-color="#fff3b0"/></style:style>
   <style:style style:name="r0" style:family="table-cell" style:data-style-name="N0"><style:table-cell-properties fo:background-color="#eeeeee"/></style:style>
   <style:style style:name="r1" style:family="table-cell" style:data-style-name="N1"><style:table-cell-properties fo:background-color="#eeeeee"/></style:style>
   <style:style style:name="r2" style:family="table-cell" style:data-style-name="N2"><style:table-cell-properties fo:background-color="#eeeeee"/></style:style>
