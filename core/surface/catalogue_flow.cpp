@@ -51,35 +51,20 @@ const DeviceSpec devices[] = {
      " Classical venturi tubes by ISO 5167-4:2003 (as-cast, machined or rough-welded convergent section)."},
 };
 
-Arg header_arg() {
-    return Arg{"header", Quantity::None,
-               "Optional: 1 (or TRUE) puts a row of names and units above the values; default 0", true};
-}
-
+// The shared builders (catalogue_family.cpp) with the flow category; the
+// device type and calibration table reach the numerics through eval_extra.
 Function make(const std::string& name, const std::string& method, std::string summary, std::vector<Arg> args,
               Quantity result, EvalExtra eval) {
-    Function f;
-    f.name = name;
-    f.method = method;
-    f.category = cat_flow;
-    f.summary = std::move(summary);
-    f.args = std::move(args);
-    f.args.push_back(units_arg());
-    f.result = result;
-    f.kind = ResultKind::Number;
+    Function f = number(name.c_str(), method.c_str(), cat_flow, std::move(summary), std::move(args), result, Eval{});
     f.eval_extra = std::move(eval);
     return f;
 }
 
 Function make_row(const std::string& name, const std::string& method, std::string summary, std::vector<Arg> args,
                   std::vector<std::pair<const char*, Quantity>> columns, EvalExtra eval) {
-    Function f = make(name, method, std::move(summary), std::move(args), Quantity::None, std::move(eval));
-    f.args.push_back(header_arg());
-    f.kind = ResultKind::Row;
-    for (const auto& c : columns) {
-        f.row_names.emplace_back(c.first);
-        f.row_quantities.push_back(c.second);
-    }
+    Function f = row(name.c_str(), method.c_str(), cat_flow, std::move(summary), std::move(args), std::move(columns),
+                     Eval{});
+    f.eval_extra = std::move(eval);
     return f;
 }
 
