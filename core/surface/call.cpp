@@ -310,6 +310,12 @@ Quantity result_quantity_of(const Function& f, std::size_t c) {
     return f.kind == ResultKind::Row ? f.row_quantities[c] : f.result;
 }
 
+// Whether an argument is one of the state's numbers (a[] of Eval): not a
+// text, not a whole range, not the header flag.
+bool is_state_arg(const catalogue::Arg& arg) {
+    return arg.quantity != Quantity::Text && !arg.whole_range && arg.name != "header";
+}
+
 // Evaluates f numerically: eval_extra, eval_units or eval, whichever it has.
 void evaluate_raw(const Function& f, const units::UnitSpec& spec, const catalogue::Extra& extra, const double* a,
                   double* res) {
@@ -333,7 +339,7 @@ void evaluate_state(const Function& f, const units::UnitSpec& spec, const catalo
     auto tiny_sentence = [&]() -> std::string {
         std::size_t j = 0;
         for (const catalogue::Arg& arg : f.args) {
-            if (arg.quantity == Quantity::Text || arg.whole_range || arg.name == "header") continue;
+            if (!is_state_arg(arg)) continue;
             const double v = a[j++];
             if (v != 0.0 && std::fabs(v) < 1e-100 && arg.quantity != Quantity::Temperature)
                 return arg.name + " = " + fmt(spec.from_core(arg.quantity, v)) + " is so close to 0 that " + f.name +
@@ -356,15 +362,14 @@ void evaluate_state(const Function& f, const units::UnitSpec& spec, const catalo
         }
     } catch (const Error& e) {
         Value ev = error_value(e, spec);
-        const auto* rv = dynamic_cast<const RangeError*>(&e);
-        if (rv && !std::isfinite(rv->value())) {
-            const std::string tiny = tiny_sentence();
-            if (!tiny.empty()) ev.text = tiny;
-        }
         if (const auto* re = dynamic_cast<const RangeError*>(&e)) {
+            if (!std::isfinite(re->value())) {
+                const std::string tiny = tiny_sentence();
+                if (!tiny.empty()) ev.text = tiny;
+            }
             std::size_t j = 0;
             for (const catalogue::Arg& arg : f.args) {
-                if (arg.quantity == Quantity::Text || arg.whole_range || arg.name == "header") continue;
+                if (!is_state_arg(arg)) continue;
                 if (j < 32 && (zero_mask >> j & 1u) && arg.name == re->input()) {
                     ev.text = with_blank_hint(ev.text);
                     break;
